@@ -1,0 +1,191 @@
+package org.stasissheet.measure;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The catalogue of every measured quantity a case may carry: lab values (the keys of {@code labs} in the case
+ * format) and the two body measures of {@code patient}. Each has a canonical unit, the units accepted with their
+ * conversion factor and source, and a plausible range in canonical units (inclusive at both ends).
+ *
+ * <p>Plausible ranges are deliberately wide: they catch unit slips (a WBC of 150000 entered as ×10⁹/L), not
+ * abnormal results. Basis of every range: common practice (wide bounds around values seen in clinical
+ * laboratories), not a published table.
+ *
+ * <p>Molar masses (g/mol), IUPAC standard atomic weights: uric acid C5H4N4O3 168.11, creatinine C4H7N3O 113.12,
+ * phosphorus 30.974, calcium 40.078.
+ */
+public enum Analyte {
+    SERUM_VISCOSITY("serumViscosity", "serum viscosity", "cP", 0.5, 30,
+            unit("cP", "cP", 1, "definition: 1 cP = 1 mPa·s"),
+            unit("mPa.s", "mPa·s", 1, "definition: 1 cP = 1 mPa·s"),
+            unit("{rel}", "relative to water", 1,
+                    "compared as reported: thresholds come from reports on the same scale (see CASE-FORMAT)")),
+    IGM("igm", "IgM", "g/L", 0, 200, massConcentrationUnits()),
+    IGG("igg", "IgG", "g/L", 0, 250, massConcentrationUnits()),
+    IGA("iga", "IgA", "g/L", 0, 200, massConcentrationUnits()),
+    TOTAL_PROTEIN("totalProtein", "total protein", "g/L", 10, 250,
+            unit("g/L", "g/L", 1, "identity"),
+            unit("g/dL", "g/dL", 10, "definition: 1 dL = 0.1 L")),
+    WBC("wbc", "white cell count", "10*9/L", 0, 2000, countUnits(true)),
+    BLASTS("blasts", "circulating blasts", "%", 0, 100,
+            unit("%", "%", 1, "identity")),
+    HEMATOCRIT("hematocrit", "hematocrit", "1", 0.05, 0.8,
+            unit("%", "%", 0.01, "definition: 1 % = 0.01"),
+            unit("L/L", "L/L", 1, "definition: L/L is dimensionless"),
+            unit("1", "fraction", 1, "identity")),
+    HEMOGLOBIN("hemoglobin", "hemoglobin", "g/L", 10, 250,
+            unit("g/L", "g/L", 1, "identity"),
+            unit("g/dL", "g/dL", 10, "definition: 1 dL = 0.1 L")),
+    PLATELETS("platelets", "platelets", "10*9/L", 0, 5000, countUnits(false)),
+    POTASSIUM("potassium", "potassium", "mmol/L", 1, 12, ionUnits()),
+    SODIUM("sodium", "sodium", "mmol/L", 90, 200, ionUnits()),
+    URIC_ACID("uricAcid", "uric acid", "umol/L", 0, 3000,
+            unit("umol/L", "µmol/L", 1, "identity"),
+            unit("mmol/L", "mmol/L", 1000, "definition: 1 mmol = 1000 µmol"),
+            unit("mg/dL", "mg/dL", molarFromMgPerDl(MolarMass.URIC_ACID), MolarMass.URIC_ACID.citation())),
+    PHOSPHATE("phosphate", "phosphate", "mmol/L", 0.1, 10,
+            unit("mmol/L", "mmol/L", 1, "identity"),
+            unit("mg/dL", "mg/dL", molarFromMgPerDl(MolarMass.PHOSPHORUS) / 1000, MolarMass.PHOSPHORUS.citation())),
+    CALCIUM("calcium", "calcium", "mmol/L", 0.5, 6,
+            unit("mmol/L", "mmol/L", 1, "identity"),
+            unit("mg/dL", "mg/dL", molarFromMgPerDl(MolarMass.CALCIUM) / 1000, MolarMass.CALCIUM.citation())),
+    CREATININE("creatinine", "creatinine", "umol/L", 5, 3000, creatinineUnits()),
+    CREATININE_UPPER_LIMIT("creatinineUpperLimit", "creatinine upper limit of normal", "umol/L", 20, 300,
+            creatinineUnits()),
+    FIBRINOGEN("fibrinogen", "fibrinogen", "g/L", 0, 15,
+            unit("g/L", "g/L", 1, "identity"),
+            unit("mg/dL", "mg/dL", 0.01, "definition: 1 mg/dL = 0.01 g/L")),
+    PAO2("pao2", "arterial O₂ tension", "mm[Hg]", 5, 700,
+            unit("mm[Hg]", "mmHg", 1, "identity"),
+            unit("kPa", "kPa", 1000 / 133.322387415, "UCUM: 1 mm[Hg] = 133.322387415 Pa (from the definition of mm[Hg] via the density of mercury and g)")),
+    SPO2("spo2", "pulse oximetry", "%", 30, 100,
+            unit("%", "%", 1, "identity")),
+    HEIGHT("height", "height", "cm", 30, 250,
+            unit("cm", "cm", 1, "identity"),
+            unit("m", "m", 100, "definition: 1 m = 100 cm"),
+            unit("[in_i]", "in", 2.54, "definition: international inch = 2.54 cm")),
+    WEIGHT("weight", "weight", "kg", 1, 400,
+            unit("kg", "kg", 1, "identity"),
+            unit("g", "g", 0.001, "definition: 1 g = 0.001 kg"),
+            unit("[lb_av]", "lb", 0.45359237, "definition: avoirdupois pound = 0.45359237 kg"));
+
+    private final String key;
+    private final String label;
+    private final String canonicalUnit;
+    private final double plausibleMin;
+    private final double plausibleMax;
+    private final List<UnitOption> units;
+
+    Analyte(String key, String label, String canonicalUnit, double plausibleMin, double plausibleMax,
+            UnitOption... units) {
+        this.key = key;
+        this.label = label;
+        this.canonicalUnit = canonicalUnit;
+        this.plausibleMin = plausibleMin;
+        this.plausibleMax = plausibleMax;
+        this.units = List.of(units);
+    }
+
+    /** The JSON key in the case format, e.g. {@code wbc}. */
+    public String key() {
+        return key;
+    }
+
+    /** Short name for people, e.g. "white cell count". */
+    public String label() {
+        return label;
+    }
+
+    public String canonicalUnit() {
+        return canonicalUnit;
+    }
+
+    public UnitOption canonicalOption() {
+        return unitOption(canonicalUnit).orElseThrow();
+    }
+
+    /** Inclusive lower plausible bound, in the canonical unit. */
+    public double plausibleMin() {
+        return plausibleMin;
+    }
+
+    /** Inclusive upper plausible bound, in the canonical unit. */
+    public double plausibleMax() {
+        return plausibleMax;
+    }
+
+    /** The accepted units, in the order a unit picker shows them. */
+    public List<UnitOption> units() {
+        return units;
+    }
+
+    public Optional<UnitOption> unitOption(String ucum) {
+        return units.stream().filter(u -> u.ucum().equals(ucum)).findFirst();
+    }
+
+    public boolean isPlausible(double canonicalValue) {
+        return canonicalValue >= plausibleMin && canonicalValue <= plausibleMax;
+    }
+
+    /** The body measures under {@code patient}; every other analyte lives under {@code labs}. */
+    public boolean isBodyMeasure() {
+        return this == HEIGHT || this == WEIGHT;
+    }
+
+    public static Optional<Analyte> byKey(String key) {
+        return Arrays.stream(values()).filter(a -> a.key.equals(key)).findFirst();
+    }
+
+    /** Lab analytes in catalogue order (everything but the body measures). */
+    public static List<Analyte> labs() {
+        return Arrays.stream(values()).filter(a -> !a.isBodyMeasure()).toList();
+    }
+
+    private static UnitOption unit(String ucum, String display, double toCanonical, String source) {
+        return new UnitOption(ucum, display, toCanonical, source);
+    }
+
+    private static UnitOption[] massConcentrationUnits() {
+        return new UnitOption[] {
+            unit("g/L", "g/L", 1, "identity"),
+            unit("g/dL", "g/dL", 10, "definition: 1 dL = 0.1 L"),
+            unit("mg/dL", "mg/dL", 0.01, "definition: 1 mg/dL = 0.01 g/L"),
+        };
+    }
+
+    private static UnitOption[] countUnits(boolean perMicrolitre) {
+        UnitOption[] common = {
+            unit("10*9/L", "×10⁹/L", 1, "identity"),
+            unit("10*3/uL", "×10³/µL", 1, "definition: 1 µL = 10⁻⁶ L"),
+        };
+        if (!perMicrolitre) {
+            return common;
+        }
+        return new UnitOption[] {
+            common[0], common[1],
+            unit("/uL", "/µL", 0.001, "definition: 1 µL = 10⁻⁶ L"),
+            unit("/mm3", "/mm³", 0.001, "definition: 1 mm³ = 1 µL"),
+        };
+    }
+
+    private static UnitOption[] ionUnits() {
+        return new UnitOption[] {
+            unit("mmol/L", "mmol/L", 1, "identity"),
+            unit("meq/L", "mEq/L", 1, "monovalent ion: 1 mEq = 1 mmol (UCUM defines eq as mol)"),
+        };
+    }
+
+    private static UnitOption[] creatinineUnits() {
+        return new UnitOption[] {
+            unit("umol/L", "µmol/L", 1, "identity"),
+            unit("mg/dL", "mg/dL", molarFromMgPerDl(MolarMass.CREATININE), MolarMass.CREATININE.citation()),
+        };
+    }
+
+    /** µmol/L per mg/dL for a substance of the given molar mass: 1 mg/dL = 10 mg/L = 10 000 / M µmol/L. */
+    private static double molarFromMgPerDl(MolarMass mass) {
+        return 10_000 / mass.gramsPerMole();
+    }
+}

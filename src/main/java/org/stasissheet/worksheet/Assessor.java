@@ -1,0 +1,30 @@
+package org.stasissheet.worksheet;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.stasissheet.intake.Case;
+import org.stasissheet.intake.Measurement;
+import org.stasissheet.rules.RuleSet;
+
+/** The one entry point of the core: a case and a rule set in, a worksheet out. Pure and deterministic. */
+public final class Assessor {
+    private Assessor() {
+    }
+
+    public static Worksheet assess(Case c, RuleSet rules) {
+        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING);
+    }
+
+    static List<InputLine> inputs(Case c) {
+        List<InputLine> lines = new ArrayList<>();
+        c.patient().height().ifPresent(m -> lines.add(line("patient.", m)));
+        c.patient().weight().ifPresent(m -> lines.add(line("patient.", m)));
+        c.labs().values().values().forEach(m -> lines.add(line("labs.", m)));
+        c.baseline().values().values().forEach(m -> lines.add(line("baseline.", m)));
+        return lines;
+    }
+
+    private static InputLine line(String prefix, Measurement m) {
+        return new InputLine(prefix + m.analyte().key(), m.analyte().label(), m.entered(), m.canonicalQuantity());
+    }
+}

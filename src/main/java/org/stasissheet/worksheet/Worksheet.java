@@ -1,0 +1,21 @@
+package org.stasissheet.worksheet;
+
+import java.util.List;
+import java.util.Objects;
+import org.stasissheet.intake.Case;
+import org.stasissheet.rules.Provenance;
+
+/**
+ * Everything one assessment concluded, ready for any renderer: immutable and complete. Renderers present it
+ * and never recompute.
+ */
+public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions) {
+    public static final String FORMAT = "stasis-worksheet/1";
+
+    public Worksheet {
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(ruleSet, "ruleSet");
+        inputs = List.copyOf(inputs);
+        cautions = List.copyOf(cautions);
+    }
+}
