@@ -1,0 +1,71 @@
+package org.stasissheet;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * A command loads only what it needs: the command line never loads JavaFX, and only the commands that write PDFs
+ * load the PDF library and its fonts. Checked on a real JVM started with the test class path, from the JVM's own
+ * class-loading log.
+ */
+class StartupLoadingTest {
+    @TempDir
+    Path dir;
+
+    @ParameterizedTest(name = "stasis {0}")
+    @ValueSource(strings = {"--help", "--version", "assess --help"})
+    @DisplayName("a command-line run loads no JavaFX and no PDF class")
+    void commandLine_loadsNeitherToolkitNorPdf(String args) throws Exception {
+        List<String> loaded = classesLoadedBy(args.split(" "));
+        assertTrue(loaded.stream().anyMatch(c -> c.startsWith("picocli.")), "sanity: the log lists the classes");
+        assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("javafx.") || c.startsWith("com.sun.javafx.")
+                || c.startsWith("com.sun.glass.") || c.startsWith("com.sun.prism.")).toList());
+        assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isPdfOrFont).toList());
+    }
+
+    static boolean isPdfOrFont(String className) {
+        return className.startsWith("com.lowagie.") || className.startsWith("org.librepdf.")
+                || className.startsWith("java.awt.Font") || className.startsWith("sun.font.");
+    }
+
+    /** Runs the tool's main class in a fresh JVM and returns the names of every class it loaded. */
+    List<String> classesLoadedBy(String... args) throws IOException, InterruptedException {
+        Path log = dir.resolve("classes.log");
+        List<String> command = new ArrayList<>(List.of(
+                Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-Xshare:off", "-Xlog:class+load=info:file=" + log,
+                "-Djava.awt.headless=true",
+                "-cp", System.getProperty("java.class.path"), Main.class.getName()));
+        command.addAll(List.of(args));
+        Process p = new ProcessBuilder(command).redirectErrorStream(true)
+                .redirectOutput(dir.resolve("out.txt").toFile()).start();
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "the run finished");
+        assertEquals(0, p.exitValue(), () -> read(dir.resolve("out.txt")));
+        try (Stream<String> lines = Files.lines(log, StandardCharsets.UTF_8)) {
+            // lines look like "[0.012s][info][class,load] picocli.CommandLine source: file:/..."
+            return lines.map(l -> l.substring(l.indexOf("] ", l.indexOf("[class,load]")) + 2))
+                    .map(l -> l.split(" ", 2)[0]).toList();
+        }
+    }
+
+    private static String read(Path p) {
+        try {
+            return Files.readString(p, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            return "(no output: " + e.getMessage() + ")";
+        }
+    }
+}
