@@ -58,7 +58,7 @@ public final class FlowEstimator {
         String ratioBasis = sv.known()
                 .map(v -> "serum viscosity " + Numbers.plain(v) + " ÷ reference " + Numbers.plain(referenceSv)
                         + " = " + Numbers.rounded(v / referenceSv, 3) + " (measured the same way)")
-                .orElse(sv.whyUnknown().orElseThrow() + ": plasma ratio taken as 1, only the hematocrit differs");
+                .orElseGet(() -> sv.whyUnknown().orElseThrow() + ": plasma ratio taken as 1, only the hematocrit differs");
         Estimate<Double> hematocrit = ApheresisPlanner.hematocrit(c);
         if (!hematocrit.isKnown()) {
             String reason = "no flow estimate: " + hematocrit.whyUnknown().orElseThrow();
@@ -284,7 +284,7 @@ public final class FlowEstimator {
                 .map(after -> "White count " + Numbers.rounded(wbc.known().orElseThrow(), 3) + " → "
                         + Numbers.rounded(after, 3) + " ×10⁹/L, " + percent + " % lower (common practice: one "
                         + "procedure lowers it by roughly 20–50 %).")
-                .orElse("White count " + percent + " % lower (common practice: one procedure lowers it by roughly "
+                .orElseGet(() -> "White count " + percent + " % lower (common practice: one procedure lowers it by roughly "
                         + "20–50 %)."));
         assumptions.add("Red cells and plasma are returned, so only the leukocrit series changes; the main "
                 + "series is the same as now.");
