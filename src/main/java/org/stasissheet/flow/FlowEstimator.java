@@ -246,8 +246,7 @@ public final class FlowEstimator {
     private static WhatIf exchange(double v, double h, double referenceH, double referenceSv, Estimate<Double> sv,
                                    Estimate<CellVolume> cell, Estimate<Double> wbc, ApheresisPlan apheresis) {
         String id = "plasma-exchange-" + Numbers.plain(v) + "-volumes";
-        String name = "plasma exchange, " + (v == Math.rint(v) ? Numbers.plain(v) + ".0" : Numbers.plain(v))
-                + " plasma volume" + (v == 1.0 ? "" : "s");
+        String name = "plasma exchange, " + plasmaVolumes(v);
         if (!sv.isKnown() || !apheresis.intravascularFraction().isKnown()) {
             String reason = "not estimated: the projection needs a measured serum viscosity and a paraprotein "
                     + "isotype (" + sv.whyUnknown().or(() -> apheresis.intravascularFraction().whyUnknown())
@@ -260,7 +259,7 @@ public final class FlowEstimator {
         double after = ExchangeKinetics.projectedSerumViscosity(before, referenceSv, r);
         double ratio = plasmaRatio(after, referenceSv);
         List<String> assumptions = List.of(
-                Numbers.plain(v) + " plasma volumes exchanged; paraprotein left r = 1 − f·(1 − e^−V) = "
+                plasmaVolumes(v) + " exchanged; paraprotein left r = 1 − f·(1 − e^−V) = "
                         + Numbers.rounded(r, 3) + " with intravascular fraction f = " + Numbers.plain(f)
                         + ", ignoring redistribution during the run.",
                 "Serum viscosity " + Numbers.rounded(before, 3) + " → " + Numbers.rounded(after, 3)
@@ -271,6 +270,12 @@ public final class FlowEstimator {
         return new WhatIf(id, name, assumptions,
                 Estimate.known(inVitroSeries(h, ratio, referenceH)),
                 leukocritSeriesFor(h, ratio, referenceH, cell, wbc));
+    }
+
+    /** "1.0 plasma volume", "1.5 plasma volumes": the size of an exchange in words. */
+    public static String plasmaVolumes(double v) {
+        return (v == Math.rint(v) ? Numbers.plain(v) + ".0" : Numbers.plain(v)) + " plasma volume"
+                + (v == 1.0 ? "" : "s");
     }
 
     private static WhatIf leukapheresis(double cut, double h, double ratio, double referenceH,

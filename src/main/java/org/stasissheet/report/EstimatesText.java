@@ -5,6 +5,7 @@ import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.apheresis.ValueRange;
 import org.stasissheet.flow.FlowEstimates;
+import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.flow.FlowPoint;
 import org.stasissheet.flow.Leukocrit;
 import org.stasissheet.flow.WhatIf;
@@ -28,7 +29,7 @@ final class EstimatesText {
         line(sb, "Intravascular fraction", value(plan.intravascularFraction(), ""));
         sb.append("  Plasma exchange:").append(NL);
         for (ExchangeRow row : plan.exchanges()) {
-            sb.append("    ").append(Numbers.plain(row.plasmaVolumes())).append(" plasma volumes: ")
+            sb.append("    ").append(FlowEstimator.plasmaVolumes(row.plasmaVolumes())).append(": ")
                     .append(litres(row.volumeL())).append("; intravascular left ")
                     .append(Numbers.rounded(100 * row.intravascularRemaining(), 3)).append(" %").append(NL)
                     .append("      paraprotein after: ").append(value(row.paraproteinAfterGPerL(), " g/L")).append(NL)
