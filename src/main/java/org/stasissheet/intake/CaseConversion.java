@@ -200,8 +200,9 @@ final class CaseConversion {
         } else {
             unit = analyte.unitOption(q.unit().get());
             if (unit.isEmpty()) {
-                problems.add(q.path() + ".unit", "\"" + q.unit().get() + "\" is not an accepted unit for "
-                        + analyte.label() + "; accepted (UCUM codes): " + accepted);
+                String value = q.value().map(v -> " (value " + v.toPlainString() + ")").orElse("");
+                problems.add(q.path() + ".unit", "\"" + q.unit().get() + "\"" + value
+                        + " is not an accepted unit for " + analyte.label() + "; accepted (UCUM codes): " + accepted);
             }
         }
         if (q.value().isEmpty()) {

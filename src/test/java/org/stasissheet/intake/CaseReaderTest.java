@@ -391,7 +391,8 @@ class CaseReaderTest {
         void unknownUnit() {
             Problem lab = only(with("labs.wbc", "{\"value\": 7.2, \"unit\": \"x10^9/L\"}"));
             assertEquals("labs.wbc.unit", lab.path());
-            assertContains(lab.message(), "\"x10^9/L\"", "white cell count", "10*9/L, 10*3/uL, /uL, /mm3");
+            assertEquals("\"x10^9/L\" (value 7.2) is not an accepted unit for white cell count; accepted (UCUM codes):"
+                    + " 10*9/L, 10*3/uL, /uL, /mm3", lab.message());
 
             Problem body = only(with("patient.height", "{\"value\": 5.3, \"unit\": \"ft\"}"));
             assertEquals("patient.height.unit", body.path());
