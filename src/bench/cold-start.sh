@@ -31,7 +31,7 @@ while [ $i -lt 200 ]; do
 done
 
 bare="$java -version"
-pdf="$launcher pdf $demo --out $work/one.pdf"
+pdf="$launcher pdf $demo -o $work/one.pdf"
 triage="$launcher triage $work/cases --out $work/triage-out"
 
 # every command must work before it is timed: a failing command times nothing useful

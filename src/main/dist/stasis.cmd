@@ -4,7 +4,7 @@ rem options that measured as worth it (src\bench\RESULTS.md): the quick C1 compi
 rem no statistics file, and the class-data archive stasis.jsa when it is present (the JVM's own checks refuse a
 rem stale one quietly). Without arguments the form opens with the JVM's default settings.
 rem   stasis --make-archive COMMAND ARGS...   (re)build stasis.jsa by running COMMAND once, e.g.
-rem   stasis --make-archive pdf samples\igm-symptomatic.json --out %TEMP%\training.pdf
+rem   stasis --make-archive pdf samples\igm-symptomatic.json -o %TEMP%\training.pdf
 rem JAVA_HOME picks the Java runtime; STASIS_JAVA_OPTS adds JVM options.
 rem Decision support only: it supports, and never replaces, clinical judgement, local protocols and licensed practice.
 rem Blocks in parentheses are avoided on purpose: a ")" in a folder name would end them early.
@@ -58,7 +58,7 @@ echo stasis: wrote "%ARCHIVE%"
 exit /b 0
 
 :no_training
-echo stasis: give a command to train on, e.g. stasis --make-archive pdf CASE.json --out training.pdf 1>&2
+echo stasis: give a command to train on, e.g. stasis --make-archive pdf CASE.json -o training.pdf 1>&2
 exit /b 2
 
 :training_failed
