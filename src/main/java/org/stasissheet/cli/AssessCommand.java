@@ -1,0 +1,41 @@
+package org.stasissheet.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.stasissheet.report.WorksheetJson;
+import org.stasissheet.report.WorksheetText;
+import org.stasissheet.worksheet.Assessor;
+import org.stasissheet.worksheet.Worksheet;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code assess CASE [--json]}: reads one case and prints its worksheet. */
+@Command(name = "assess", mixinStandardHelpOptions = true,
+        description = "Read one case (a case JSON file or a worksheet PDF) and print its worksheet.")
+final class AssessCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")
+    Path caseFile;
+
+    @Option(names = "--json", description = "print the stasis-worksheet/1 JSON object instead of text")
+    boolean json;
+
+    @Mixin
+    RulesOption rules;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile), Inputs.ruleSet(rules.dir()));
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(json ? WorksheetJson.render(sheet) : WorksheetText.render(sheet));
+        out.flush();
+        return ExitCode.DONE;
+    }
+}

@@ -1,0 +1,12 @@
+package org.stasissheet.cli;
+
+/** The tool's version as stamped in the jar manifest at build time. */
+public final class ToolVersion {
+    private ToolVersion() {
+    }
+
+    public static String get() {
+        String v = ToolVersion.class.getPackage().getImplementationVersion();
+        return v == null ? "development" : v;
+    }
+}

@@ -1,0 +1,47 @@
+package org.stasissheet;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.junit.AnalyzeClasses;
+import com.tngtech.archunit.junit.ArchTest;
+import com.tngtech.archunit.lang.ArchRule;
+
+/** The boundaries that keep the core pure and the tool offline. */
+@AnalyzeClasses(packages = "org.stasissheet", importOptions = ImportOption.DoNotIncludeTests.class)
+class ArchitectureTest {
+    private static final String[] CORE = {
+        "org.stasissheet.measure..", "org.stasissheet.intake..", "org.stasissheet.rules..",
+        "org.stasissheet.flow..", "org.stasissheet.apheresis..", "org.stasissheet.worksheet.."
+    };
+    private static final String[] ADAPTERS = {
+        "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui.."
+    };
+
+    @ArchTest
+    static final ArchRule coreKnowsNoJavaFx = noClasses().that().resideInAnyPackage(CORE)
+            .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+            .because("the core must run without a display and be testable without the toolkit");
+
+    @ArchTest
+    static final ArchRule coreKnowsNoAdapter = noClasses().that().resideInAnyPackage(CORE)
+            .should().dependOnClassesThat().resideInAnyPackage(ADAPTERS)
+            .because("data travels one way: case -> core -> worksheet -> renderers");
+
+    @ArchTest
+    static final ArchRule coreDoesNoFileIo = noClasses().that().resideInAnyPackage(CORE)
+            .should().dependOnClassesThat().resideInAnyPackage("java.nio.file..")
+            .orShould().dependOnClassesThat().haveFullyQualifiedName("java.io.File")
+            .orShould().dependOnClassesThat().haveFullyQualifiedName("java.io.FileInputStream")
+            .orShould().dependOnClassesThat().haveFullyQualifiedName("java.io.FileOutputStream")
+            .because("the core is handed bytes; the files package reads and writes them");
+
+    @ArchTest
+    static final ArchRule onlyTheFormKnowsJavaFx = noClasses().that().resideOutsideOfPackage("org.stasissheet.ui..")
+            .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+            .because("the command line must run without loading JavaFX");
+
+    @ArchTest
+    static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")
+            .because("patient data never leaves the machine");
+}

@@ -1,0 +1,43 @@
+package org.stasissheet.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+class StasisCommandTest {
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        return StasisCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+    }
+
+    @Test
+    @DisplayName("an unknown option is invalid input: exit 2, a usage hint, no stack trace")
+    void unknownOption_exitsTwo() {
+        assertEquals(ExitCode.INVALID_INPUT, run("assess", "--no-such-option", "x.json"));
+        assertTrue(err.toString().contains("--no-such-option"), err.toString());
+        assertFalse(err.toString().contains("\tat "), "no stack trace: " + err);
+    }
+
+    @Test
+    @DisplayName("an internal error prints one short line and exits 1")
+    void internalError_isOneLine() {
+        int code = StasisCommand.report(new IllegalStateException("boom"), new PrintWriter(err, true));
+        assertEquals(ExitCode.INTERNAL_ERROR, code);
+        assertTrue(err.toString().startsWith("stasis: internal error (IllegalStateException): boom"), err.toString());
+        assertFalse(err.toString().contains("\tat "));
+    }
+
+    @Test
+    @DisplayName("help names the standing caution")
+    void help_carriesTheCaution() {
+        assertEquals(ExitCode.DONE, run("--help"));
+        assertTrue(out.toString().contains("never replaces"), out.toString());
+    }
+}
