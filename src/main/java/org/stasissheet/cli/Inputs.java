@@ -2,7 +2,11 @@ package org.stasissheet.cli;
 
 import java.nio.file.Path;
 import java.util.Optional;
+import java.util.ArrayList;
+import java.util.List;
+import org.stasissheet.files.RuleSources;
 import org.stasissheet.intake.Case;
+import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.RuleSet;
 
 /**
@@ -17,7 +21,16 @@ final class Inputs {
         throw new InvalidInputException("reading case files lands with the intake work: " + file);
     }
 
+    /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
     static RuleSet ruleSet(Optional<Path> dir) {
-        throw new InvalidInputException("loading rule sets lands with the rules work");
+        LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);
+        if (result instanceof LoadResult.Refused refused) {
+            List<String> lines = new ArrayList<>();
+            lines.add("The rule set " + dir.map(Path::toString).orElse("(shipped)")
+                    + " was refused; nothing of it was used:");
+            refused.problems().forEach(p -> lines.add("  " + p));
+            throw new InvalidInputException(lines);
+        }
+        return ((LoadResult.Loaded) result).ruleSet();
     }
 }

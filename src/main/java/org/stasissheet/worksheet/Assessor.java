@@ -5,6 +5,7 @@ import java.util.List;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Measurement;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.rules.Verdicts;
 
 /** The one entry point of the core: a case and a rule set in, a worksheet out. Pure and deterministic. */
 public final class Assessor {
@@ -12,7 +13,9 @@ public final class Assessor {
     }
 
     public static Worksheet assess(Case c, RuleSet rules) {
-        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING);
+        Verdicts.Outcome outcome = Verdicts.assess(c, rules);
+        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING, outcome.hyperviscosity(),
+                outcome.leukostasis(), outcome.tumorLysis(), outcome.flags());
     }
 
     static List<InputLine> inputs(Case c) {
