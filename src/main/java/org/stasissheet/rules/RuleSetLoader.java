@@ -91,6 +91,7 @@ public final class RuleSetLoader {
         private final Map<String, String> parameterFile = new HashMap<>();
         private final Map<String, Where> parameterWhere = new HashMap<>();
         private final Map<String, String> firstSeen = new HashMap<>();
+        private final Set<String> declaredParameters = new java.util.HashSet<>();
         private final List<Rule> rules = new ArrayList<>();
         private final List<PendingRule> pending = new ArrayList<>();
         private String file = MANIFEST;
@@ -131,12 +132,15 @@ public final class RuleSetLoader {
                             + ": list it, or remove it from the folder");
                 }
             }
+            Map<String, Mapping> parsed = new LinkedHashMap<>();
             for (String path : listed) {
-                byte[] bytes = files.get(path);
-                if (bytes != null) {
-                    parse(path, bytes).ifPresent(node -> readRuleFile(path, node));
-                }
+                parse(path, files.get(path)).ifPresent(node -> parsed.put(path, node));
             }
+            if (parsed.size() < listed.size()) {
+                // a file that cannot be parsed hides its parameters: checking the rest would only echo that
+                return new LoadResult.Refused(problems);
+            }
+            parsed.forEach(this::readRuleFile);
             file = MANIFEST;
             checkRequired(m);
             for (PendingRule p : pending) {
@@ -256,6 +260,7 @@ public final class RuleSetLoader {
             if (id.isEmpty() || !unique(id, m)) {
                 return;
             }
+            declaredParameters.add(id);
             if (value.isPresent() && !source.isEmpty() && basis.isPresent()) {
                 parameters.put(id, new Parameter(id, value.get(), source, basis.get(), note, what, equivalents));
                 parameterFile.put(id, file);
@@ -338,6 +343,14 @@ public final class RuleSetLoader {
         }
 
         private void readRule(Mapping m) {
+            int before = problems.size();
+            if (!buildRule(m) && problems.size() == before) {
+                // never drop a rule silently: a set without it would be a partial set
+                problem(m.where(), "this rule could not be read");
+            }
+        }
+
+        private boolean buildRule(Mapping m) {
             keys(m, RULE_KEYS);
             String id = text(m, "id", true);
             String topic = text(m, "topic", true);
@@ -363,12 +376,14 @@ public final class RuleSetLoader {
                 when = condition(whenNode);
             }
             if (id.isEmpty() || !unique(id, m)) {
-                return;
+                return false;
             }
             if (level.isPresent() && when.isPresent() && !topic.isEmpty() && !title.isEmpty()
                     && !explanation.isEmpty() && !source.isEmpty() && basis.isPresent()) {
                 rules.add(new Rule(id, topic, level.get(), when.get(), title, explanation, source, basis.get(), note));
+                return true;
             }
+            return false;
         }
 
         private boolean unique(String id, Mapping m) {
@@ -524,7 +539,9 @@ public final class RuleSetLoader {
             } else {
                 Parameter p = parameters.get(text);
                 if (p == null) {
-                    problem(s.where(), "unknown parameter \"" + text + "\"");
+                    if (!declaredParameters.contains(text)) {
+                        problem(s.where(), "unknown parameter \"" + text + "\"");
+                    } // else: declared but itself invalid, already reported
                     return Optional.empty();
                 }
                 t = Threshold.of(p);
