@@ -92,6 +92,7 @@ public final class RuleSetLoader {
         private final Map<String, Where> parameterWhere = new HashMap<>();
         private final Map<String, String> firstSeen = new HashMap<>();
         private final Set<String> declaredParameters = new java.util.HashSet<>();
+        private int invalidReferences;
         private final List<Rule> rules = new ArrayList<>();
         private final List<PendingRule> pending = new ArrayList<>();
         private String file = MANIFEST;
@@ -344,7 +345,8 @@ public final class RuleSetLoader {
 
         private void readRule(Mapping m) {
             int before = problems.size();
-            if (!buildRule(m) && problems.size() == before) {
+            int referencesBefore = invalidReferences;
+            if (!buildRule(m) && problems.size() == before && invalidReferences == referencesBefore) {
                 // never drop a rule silently: a set without it would be a partial set
                 problem(m.where(), "this rule could not be read");
             }
@@ -541,7 +543,9 @@ public final class RuleSetLoader {
                 if (p == null) {
                     if (!declaredParameters.contains(text)) {
                         problem(s.where(), "unknown parameter \"" + text + "\"");
-                    } // else: declared but itself invalid, already reported
+                    } else {
+                        invalidReferences++; // declared but itself invalid: already reported at its entry
+                    }
                     return Optional.empty();
                 }
                 t = Threshold.of(p);

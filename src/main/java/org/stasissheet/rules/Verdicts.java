@@ -273,7 +273,7 @@ public final class Verdicts {
             }
         }
         return new Criterion(analyte, Optional.of(m.entered()), false,
-                "not " + op.symbol() + " " + limit.describe() + (base.isPresent() ? ", nor 25 % change from baseline"
+                "not " + op.symbol() + " " + limit.describe() + (base.isPresent() ? ", nor " + Numbers.plain(change * 100) + " % change from baseline"
                         : ", no baseline"));
     }
 
