@@ -43,7 +43,8 @@ public final class WorksheetJson {
         root.set("leukostasis", leukostasis(sheet.leukostasis()));
         root.set("tumorLysis", tumorLysis(sheet.tumorLysis()));
         root.set("flags", flags(sheet.flags()));
-        // flow, apheresis: estimates work
+        root.set("apheresis", EstimatesJson.apheresis(sheet.apheresis()));
+        root.set("flow", EstimatesJson.flow(sheet.flow()));
         ArrayNode cautions = root.putArray("cautions");
         sheet.cautions().forEach(cautions::add);
         return root;

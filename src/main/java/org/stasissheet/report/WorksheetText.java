@@ -28,8 +28,9 @@ public final class WorksheetText {
         ruleSet(sb, sheet.ruleSet());
         verdicts(sb, sheet);
         flags(sb, sheet);
-        // flow and apheresis: estimates work
         inputs(sb, sheet);
+        EstimatesText.apheresis(sb, sheet.apheresis());
+        EstimatesText.flow(sb, sheet.flow());
         return sb.toString();
     }
 

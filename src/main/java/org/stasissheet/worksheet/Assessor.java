@@ -2,6 +2,9 @@ package org.stasissheet.worksheet;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.apheresis.ApheresisPlanner;
+import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Measurement;
 import org.stasissheet.rules.RuleSet;
@@ -13,8 +16,10 @@ public final class Assessor {
     }
 
     public static Worksheet assess(Case c, RuleSet rules) {
+        ApheresisPlan apheresis = ApheresisPlanner.plan(c, rules);
         Verdicts.Outcome outcome = Verdicts.assess(c, rules);
-        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING, outcome.hyperviscosity(),
+        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING,
+                FlowEstimator.estimate(c, rules, apheresis), apheresis, outcome.hyperviscosity(),
                 outcome.leukostasis(), outcome.tumorLysis(), outcome.flags());
     }
 

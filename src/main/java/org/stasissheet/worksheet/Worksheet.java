@@ -2,6 +2,8 @@ package org.stasissheet.worksheet;
 
 import java.util.List;
 import java.util.Objects;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.intake.Case;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
@@ -16,6 +18,7 @@ import org.stasissheet.rules.TumorLysisVerdict;
  * @param flags every rule that fired, most urgent level first, then by id
  */
 public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions,
+                        FlowEstimates flow, ApheresisPlan apheresis,
                         HyperviscosityVerdict hyperviscosity, LeukostasisVerdict leukostasis,
                         TumorLysisVerdict tumorLysis, List<Flag> flags) {
     public static final String FORMAT = "stasis-worksheet/1";
@@ -23,6 +26,8 @@ public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs,
     public Worksheet {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(ruleSet, "ruleSet");
+        Objects.requireNonNull(flow, "flow");
+        Objects.requireNonNull(apheresis, "apheresis");
         inputs = List.copyOf(inputs);
         cautions = List.copyOf(cautions);
         Objects.requireNonNull(hyperviscosity, "hyperviscosity");
