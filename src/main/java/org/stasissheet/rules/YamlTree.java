@@ -6,9 +6,15 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 
@@ -16,6 +22,9 @@ import java.util.Objects;
  * A YAML document as a small tree in which every node remembers its line and column, so the validator can point
  * at the exact spot of an unknown key or a bad value. Built from Jackson's YAML token stream (bytes in, no file
  * access). Duplicate keys in one mapping are reported here rather than silently overwritten.
+ *
+ * <p>Hostile files are refused early, before they can exhaust memory or stack: the size first, then strict UTF-8
+ * (naming the first bad byte), then, while reading, the nesting depth and the length of every key and value.
  */
 final class YamlTree {
     private YamlTree() {
@@ -50,17 +59,29 @@ final class YamlTree {
         }
     }
 
+    /** Largest rule file read, in bytes: 1 MiB. The shipped files are a few kilobytes each. */
+    static final int MAX_BYTES = 1 << 20;
+    /** Deepest nesting of mappings and lists accepted; the schema needs five levels. */
+    static final int MAX_DEPTH = 32;
+    /** Longest key or value accepted, in characters; the longest shipped explanation is under a thousand. */
+    static final int MAX_SCALAR_CHARS = 10_000;
+
     private static final YAMLFactory FACTORY = new YAMLFactory();
 
     /** Parses one document; an empty file gives an empty mapping at 1:1. */
     static Node parse(byte[] bytes) throws Malformed {
         Objects.requireNonNull(bytes, "bytes");
+        if (bytes.length > MAX_BYTES) {
+            throw new Malformed("the file is " + bytes.length + " bytes; a rule file may be at most " + MAX_BYTES
+                    + " bytes (1 MiB)", new Where(1, 1));
+        }
+        requireUtf8(bytes);
         try (JsonParser p = FACTORY.createParser(bytes)) {
             JsonToken t = p.nextToken();
             if (t == null) {
                 return new Mapping(Map.of(), Map.of(), new Where(1, 1));
             }
-            return read(p, t);
+            return read(p, t, 1);
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
             Where where = at == null ? new Where(1, 1) : new Where(Math.max(1, at.getLineNr()),
@@ -71,8 +92,33 @@ final class YamlTree {
         }
     }
 
-    private static Node read(JsonParser p, JsonToken t) throws IOException, Malformed {
+    /** Refuses bytes that are not UTF-8, naming the first bad byte and where it is. */
+    private static void requireUtf8(byte[] bytes) throws Malformed {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        if (decoder.decode(in, CharBuffer.allocate(bytes.length), true).isError()) {
+            int offset = in.position();
+            int line = 1;
+            int lineStart = 0;
+            for (int i = 0; i < offset; i++) {
+                if (bytes[i] == '\n') {
+                    line++;
+                    lineStart = i + 1;
+                }
+            }
+            throw new Malformed(String.format(Locale.ROOT, "the file is not valid UTF-8: byte 0x%02X at byte offset "
+                    + "%d cannot start or continue a character; save the file as UTF-8", bytes[offset] & 0xFF, offset),
+                    new Where(line, offset - lineStart + 1));
+        }
+    }
+
+    private static Node read(JsonParser p, JsonToken t, int depth) throws IOException, Malformed {
         Where where = where(p.currentTokenLocation());
+        if ((t == JsonToken.START_OBJECT || t == JsonToken.START_ARRAY) && depth > MAX_DEPTH) {
+            throw new Malformed("nested more than " + MAX_DEPTH + " levels deep; a rule file needs far fewer", where);
+        }
         switch (t) {
             case START_OBJECT -> {
                 Map<String, Node> entries = new LinkedHashMap<>();
@@ -80,11 +126,12 @@ final class YamlTree {
                 for (JsonToken k = p.nextToken(); k != JsonToken.END_OBJECT; k = p.nextToken()) {
                     String name = p.currentName();
                     Where keyWhere = where(p.currentTokenLocation());
+                    requireShort(name, "key", keyWhere);
                     if (entries.containsKey(name)) {
                         throw new Malformed("duplicate key \"" + name + "\" (first at line "
                                 + keys.get(name).line() + ")", keyWhere);
                     }
-                    Node value = read(p, p.nextToken());
+                    Node value = read(p, p.nextToken(), depth + 1);
                     entries.put(name, value);
                     keys.put(name, keyWhere);
                 }
@@ -93,7 +140,7 @@ final class YamlTree {
             case START_ARRAY -> {
                 List<Node> items = new ArrayList<>();
                 for (JsonToken i = p.nextToken(); i != JsonToken.END_ARRAY; i = p.nextToken()) {
-                    items.add(read(p, i));
+                    items.add(read(p, i, depth + 1));
                 }
                 return new Sequence(items, where);
             }
@@ -101,8 +148,17 @@ final class YamlTree {
                 return new Scalar("", true, where);
             }
             default -> {
-                return new Scalar(p.getText(), false, where);
+                String text = p.getText();
+                requireShort(text, "value", where);
+                return new Scalar(text, false, where);
             }
+        }
+    }
+
+    private static void requireShort(String text, String what, Where where) throws Malformed {
+        if (text != null && text.length() > MAX_SCALAR_CHARS) {
+            throw new Malformed("a " + what + " of " + text.length() + " characters; at most " + MAX_SCALAR_CHARS
+                    + " are accepted", where);
         }
     }
 
