@@ -26,7 +26,8 @@ class StartupLoadingTest {
     Path dir;
 
     @ParameterizedTest(name = "stasis {0}")
-    @ValueSource(strings = {"--help", "--version", "assess --help"})
+    @ValueSource(strings = {"--help", "--version", "assess --help", "assess samples/igm-symptomatic.json",
+        "assess --json samples/cll-extreme.json"})
     @DisplayName("a command-line run loads no JavaFX and no PDF class")
     void commandLine_loadsNeitherToolkitNorPdf(String args) throws Exception {
         List<String> loaded = classesLoadedBy(args.split(" "));
