@@ -32,7 +32,7 @@ done
 
 bare="$java -version"
 pdf="$launcher pdf $demo -o $work/one.pdf"
-triage="$launcher triage $work/cases --out $work/triage-out"
+triage="$launcher triage $work/cases -o $work/triage-out"
 
 # every command must work before it is timed: a failing command times nothing useful
 for cmd in "$pdf" "$triage"; do
