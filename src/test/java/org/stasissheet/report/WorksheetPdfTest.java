@@ -1,0 +1,155 @@
+package org.stasissheet.report;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.util.Map;
+import org.apache.pdfbox.pdmodel.font.PDFont;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.stasissheet.files.WorksheetPdfs;
+import org.stasissheet.worksheet.Cautions;
+import org.stasissheet.worksheet.Worksheet;
+
+class WorksheetPdfTest {
+    private static final String LABEL = "Invented patient, bed 4";
+
+    private static byte[] render(String label, PdfOptions options) {
+        Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(label), Fixtures.SHIPPED);
+        return WorksheetPdf.render(sheet, options, Fixtures.GENERATED, Fixtures.caseJson(label));
+    }
+
+    private static String squash(String s) {
+        return s.replaceAll("\\s+", " ");
+    }
+
+    @Nested
+    @DisplayName("every page")
+    class EveryPage {
+        @ParameterizedTest
+        @EnumSource(Paper.class)
+        @DisplayName("carries every standing caution and 'Page X of Y'")
+        void cautionsAndPageNumbers(Paper paper) throws IOException {
+            try (PdfProbe pdf = new PdfProbe(render(LABEL, new PdfOptions(paper, true, "test")))) {
+                assertTrue(pdf.pages() >= 1);
+                for (int n = 1; n <= pdf.pages(); n++) {
+                    String text = squash(pdf.page(n));
+                    for (String caution : Cautions.STANDING) {
+                        assertTrue(text.contains(squash(caution)), "page " + n + " lacks caution: " + caution);
+                    }
+                    assertTrue(text.contains("Page " + n + " of " + pdf.pages()), "page " + n + ": " + text);
+                }
+            }
+        }
+
+        @Test
+        @DisplayName("the paper option sets the page size (A4 595 × 842 pt, Letter 612 × 792 pt, ISO 216 / ANSI)")
+        void paperSizes() throws IOException {
+            try (var a4 = org.apache.pdfbox.Loader.loadPDF(render(LABEL, new PdfOptions(Paper.A4, true, "t")));
+                 var letter = org.apache.pdfbox.Loader.loadPDF(render(LABEL, new PdfOptions(Paper.LETTER, true, "t")))) {
+                // A4 is 210 × 297 mm = 595.3 × 841.9 pt; Letter 8.5 × 11 in = 612 × 792 pt (1 pt = 1/72 in)
+                assertEquals(595.3, a4.getPage(0).getMediaBox().getWidth(), 0.5);
+                assertEquals(841.9, a4.getPage(0).getMediaBox().getHeight(), 0.5);
+                assertEquals(612, letter.getPage(0).getMediaBox().getWidth(), 0.5);
+                assertEquals(792, letter.getPage(0).getMediaBox().getHeight(), 0.5);
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("the provenance block shows the rule set's full SHA-256, name and version")
+    void provenance_fullSha256() throws IOException {
+        try (PdfProbe pdf = new PdfProbe(render(LABEL, PdfOptions.defaults("9.9.9")))) {
+            String text = squash(pdf.allText());
+            assertTrue(text.contains(Fixtures.SHA256), text);
+            assertTrue(text.contains("stasis-core, version 1.0.0"), text);
+            assertTrue(text.contains("Stasis Sheet 9.9.9"), text);
+            assertFalse(text.contains("LOCAL PROTOCOL"), "the shipped set is not a local protocol");
+        }
+    }
+
+    @Test
+    @DisplayName("a local rule set is announced as a local protocol")
+    void localProtocol_isAnnounced() throws IOException {
+        Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.LOCAL);
+        byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                Fixtures.caseJson(LABEL));
+        try (PdfProbe pdf = new PdfProbe(bytes)) {
+            assertTrue(squash(pdf.allText()).contains("LOCAL PROTOCOL: this rule set differs"));
+        }
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {Fixtures.GREEK_LABEL, Fixtures.CYRILLIC_LABEL, "Zoë Ångström-Łukasiewicz"})
+    @DisplayName("patient labels in Greek, Cyrillic and accented Latin are extractable text in embedded fonts")
+    void unicodeLabels_areExtractable(String label) throws IOException {
+        try (PdfProbe pdf = new PdfProbe(render(label, PdfOptions.defaults("t")))) {
+            assertTrue(pdf.page(1).contains(label), pdf.page(1));
+            for (PDFont font : pdf.fonts()) {
+                assertTrue(font.isEmbedded(), font.getName() + " must be embedded");
+                assertTrue(font.getName().contains("LiberationSans"), font.getName());
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("the case file is embedded byte for byte, and OpenPDF and PDFBox both read it back")
+    void attachment_equalsTheCase() throws IOException {
+        byte[] json = Fixtures.caseJson(Fixtures.GREEK_LABEL);
+        Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(Fixtures.GREEK_LABEL), Fixtures.SHIPPED);
+        byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED, json);
+        try (PdfProbe pdf = new PdfProbe(bytes)) {
+            Map<String, byte[]> files = pdf.attachments();
+            assertEquals(1, files.size(), files.keySet().toString());
+            assertArrayEquals(json, files.get(WorksheetPdf.ATTACHMENT_NAME));
+        }
+        assertArrayEquals(json, WorksheetPdfs.extractCase(bytes));
+        assertEquals(WorksheetPdf.ATTACHMENT_NAME, WorksheetPdfs.ATTACHMENT_NAME);
+    }
+
+    @Test
+    @DisplayName("metadata carries the fixed title and no patient data")
+    void metadata_hasNoPatientData() throws IOException {
+        try (PdfProbe pdf = new PdfProbe(render(LABEL, PdfOptions.defaults("t")))) {
+            assertEquals("Stasis Sheet worksheet", pdf.title());
+            String meta = pdf.allMetadata();
+            assertFalse(meta.contains("Invented"), meta);
+            assertFalse(meta.contains("bed 4"), meta);
+        }
+    }
+
+    @Test
+    @DisplayName("--no-identifiers leaves the label out of every page and out of the embedded case")
+    void noIdentifiers_removesTheLabelEverywhere() throws IOException {
+        byte[] bytes = render(Fixtures.CYRILLIC_LABEL, new PdfOptions(Paper.A4, false, "t"));
+        try (PdfProbe pdf = new PdfProbe(bytes)) {
+            assertFalse(pdf.allText().contains("Анна"), "label text on a page");
+            assertFalse(pdf.allText().contains("палата"), "label text on a page");
+            assertTrue(pdf.allText().contains("left out of this copy"));
+            String embedded = new String(pdf.attachments().get(WorksheetPdf.ATTACHMENT_NAME), StandardCharsets.UTF_8);
+            assertFalse(embedded.contains("Анна"), embedded);
+            assertTrue(embedded.contains("\"ageYears\""), "the rest of the case stays: " + embedded);
+            assertTrue(embedded.contains("St. Alder Infirmary"), "extra stays verbatim: " + embedded);
+        }
+        // the raw bytes hold no UTF-16 or UTF-8 trace of the label either (the font subset is not searched)
+        assertFalse(new String(bytes, StandardCharsets.ISO_8859_1).contains("bed 4"));
+    }
+
+    @Test
+    @DisplayName("the same inputs give the same visible text (the renderer has no clock of its own)")
+    void rendering_isDeterministicInText() throws IOException {
+        try (PdfProbe a = new PdfProbe(render(LABEL, PdfOptions.defaults("t")));
+             PdfProbe b = new PdfProbe(render(LABEL, PdfOptions.defaults("t")))) {
+            assertEquals(a.allText(), b.allText());
+            assertTrue(a.allText().contains("2026-03-05 03:05 +01:00"), "generation time as passed in");
+        }
+    }
+}
