@@ -144,12 +144,20 @@ final class FlowChart {
         t.stroke();
         t.setLineDash(0);
         for (Point p : visible) {
-            marker(t, MARKERS[index % MARKERS.length], axis.x(p.diameterUm()), axis.y(p.relativeFlow()));
+            marker(t, MARKERS[markerIndex(index)], axis.x(p.diameterUm()), axis.y(p.relativeFlow()));
         }
     }
 
+    /**
+     * Series i gets dash pattern i mod 5 and marker (i + i div 5) mod 5: the first 25 series all differ in the
+     * pair, so no two lines look alike even in grey.
+     */
+    static int markerIndex(int index) {
+        return (index + index / DASHES.length) % MARKERS.length;
+    }
+
     private static void style(PdfTemplate t, int index) {
-        t.setColorStroke(SHADES[index % SHADES.length]);
+        t.setColorStroke(SHADES[markerIndex(index) % SHADES.length]);
         t.setLineWidth(1.2f);
         float[] dash = DASHES[index % DASHES.length];
         if (dash.length == 0) {
@@ -206,7 +214,7 @@ final class FlowChart {
             t.lineTo(x + 26, y + 2.5f);
             t.stroke();
             t.setLineDash(0);
-            marker(t, MARKERS[i % MARKERS.length], x + 13, y + 2.5f);
+            marker(t, MARKERS[markerIndex(i)], x + 13, y + 2.5f);
             legendText(t, font, series.get(i).label(), x + 32, y);
         }
     }

@@ -59,7 +59,7 @@ public final class WorksheetPdf {
     static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm xxx", Locale.ROOT);
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private static final float MARGIN = 40;
-    private static final float CAUTION_BAND = 62;
+    private static final float CAUTION_BAND = 50;
     private static final float FOOTER_BAND = 34;
     private static final Color RULE_GREY = new Color(0x88, 0x88, 0x88);
     private static final Color HEAD_FILL = new Color(0xee, 0xee, 0xee);
@@ -101,6 +101,8 @@ public final class WorksheetPdf {
             PdfWriter writer = PdfWriter.getInstance(doc, out);
             writer.setPageEvent(new PageFrame());
             writer.setFullCompression();
+            // keep the chart where it belongs, between its heading and its table, even when it moves to a new page
+            writer.setStrictImageSequence(true);
             doc.addTitle(TITLE);
             doc.addCreator("Stasis Sheet " + options.toolVersion());
             doc.addCreationDate(new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime())));
@@ -109,6 +111,8 @@ public final class WorksheetPdf {
             header(doc);
             inputs(doc);
             caseDetails(doc);
+            PdfEstimateSections.flow(this, doc, writer);
+            PdfEstimateSections.apheresis(this, doc);
             sourceList(doc);
             provenance(doc);
             doc.close();
@@ -122,6 +126,11 @@ public final class WorksheetPdf {
 
     Worksheet sheet() {
         return sheet;
+    }
+
+    /** The width between the margins, points. */
+    float contentWidth() {
+        return options.paper().size().getWidth() - 2 * MARGIN;
     }
 
     SourceList sources() {
@@ -397,7 +406,10 @@ public final class WorksheetPdf {
             }
             ct.addElement(p);
             try {
-                ct.go();
+                if (ColumnText.hasMoreText(ct.go())) {
+                    // a caution cut short is worse than no PDF: fail loudly so the band gets made taller
+                    throw new IllegalStateException("the standing cautions do not fit the caution band");
+                }
             } catch (DocumentException e) {
                 throw new IllegalStateException("caution band could not be laid out", e);
             }

@@ -5,6 +5,7 @@ import java.time.OffsetDateTime;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.Optional;
+import org.stasissheet.apheresis.EstimateFixtures;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Condition;
 import org.stasissheet.intake.Cryoglobulin;
@@ -74,6 +75,6 @@ final class Fixtures {
 
     /** The worksheet of a case under a rule set with this provenance. */
     static Worksheet sheet(Case c, Provenance provenance) {
-        return Assessor.assess(c, new RuleSet(provenance, "test rule set", Map.of()));
+        return Assessor.assess(c, new RuleSet(provenance, "test rule set", EstimateFixtures.rules().parameters()));
     }
 }
