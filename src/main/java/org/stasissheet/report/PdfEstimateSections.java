@@ -42,7 +42,7 @@ final class PdfEstimateSections {
         }
         doc.add(pdf.heading("Microvascular flow estimate"));
         if (flow.byDiameter().whyUnknown().isPresent()) {
-            doc.add(pdf.text("No flow estimate: " + flow.byDiameter().whyUnknown().get(), pdf.bodyBold()));
+            doc.add(pdf.text("No flow chart. " + sentence(flow.byDiameter().whyUnknown().get()), pdf.bodyBold()));
             caveats(pdf, doc, flow.caveats());
             return;
         }
@@ -128,8 +128,7 @@ final class PdfEstimateSections {
     }
 
     private static void caveats(WorksheetPdf pdf, Document doc, List<String> caveats) throws DocumentException {
-        Paragraph head = pdf.text("What this estimate leaves out", pdf.bodyBold());
-        head.setSpacingBefore(3);
+        Paragraph head = pdf.subheading("What this estimate leaves out", pdf.bodyBold(), 3);
         doc.add(head);
         for (String c : caveats) {
             doc.add(pdf.text("• " + c, pdf.small()));
@@ -140,8 +139,7 @@ final class PdfEstimateSections {
         if (flow.whatIf().isEmpty()) {
             return;
         }
-        Paragraph head = pdf.text("What-if assumptions", pdf.bodyBold());
-        head.setSpacingBefore(3);
+        Paragraph head = pdf.subheading("What-if assumptions", pdf.bodyBold(), 3);
         doc.add(head);
         for (WhatIf w : flow.whatIf()) {
             String text = w.byDiameter().whyUnknown().map(r -> "not drawn: " + r)
@@ -169,21 +167,25 @@ final class PdfEstimateSections {
 
         int kinetics = pdf.sources().cite(EstimateSources.ONE_COMPARTMENT);
         int projection = pdf.sources().cite(EstimateSources.SV_PROJECTION);
-        Paragraph head = pdf.text("Plasma exchange [" + kinetics + "]", pdf.bodyBold());
-        head.setSpacingBefore(4);
+        Paragraph head = pdf.subheading("Plasma exchange [" + kinetics + "]", pdf.bodyBold(), 4);
         doc.add(head);
         PdfPTable t = pdf.table(1.3f, 1.4f, 2f, 2f, 2.4f);
         pdf.headerCells(t, "plasma volumes", "volume", "intravascular left", "paraprotein after",
                 "serum viscosity after [" + projection + "]");
+        java.util.Set<String> reasons = new java.util.LinkedHashSet<>();
         for (ExchangeRow r : plan.exchanges()) {
             t.addCell(pdf.cell(Numbers.rounded(r.plasmaVolumes(), 3), pdf.body()));
-            t.addCell(pdf.cell(litres(r.volumeL()), pdf.body()));
+            t.addCell(pdf.cell(orDash(r.volumeL(), x -> Numbers.rounded(x, 3) + " L", reasons), pdf.body()));
             t.addCell(pdf.cell(Numbers.rounded(r.intravascularRemaining() * 100, 3) + " %", pdf.body()));
-            t.addCell(pdf.cell(known(r.paraproteinAfterGPerL(), x -> Numbers.rounded(x, 3) + " g/L"), pdf.body()));
-            t.addCell(pdf.cell(known(r.serumViscosityAfter(), x -> Numbers.rounded(x, 3) + " (approximation)"),
+            t.addCell(pdf.cell(orDash(r.paraproteinAfterGPerL(), x -> Numbers.rounded(x, 3) + " g/L", reasons),
                     pdf.body()));
+            t.addCell(pdf.cell(orDash(r.serumViscosityAfter(), x -> Numbers.rounded(x, 3) + " (approximation)",
+                    reasons), pdf.body()));
         }
         doc.add(t);
+        for (String reason : reasons) {
+            doc.add(pdf.text("— " + sentence(reason), pdf.small()));
+        }
 
         int leuka = pdf.sources().cite(EstimateSources.LEUKAPHERESIS);
         PdfPTable l = pdf.table(3.2f, 4f);
@@ -211,8 +213,29 @@ final class PdfEstimateSections {
         return Numbers.rounded(r.low(), 3) + "–" + Numbers.rounded(r.high(), 3);
     }
 
+    /** The value, or the core's reason in its own words (it already says what was not estimated). */
     private static <T> String known(Estimate<T> e, java.util.function.Function<T, String> format) {
-        return e.known().map(format).orElseGet(() -> "not estimated: " + e.whyUnknown().orElse(""));
+        return e.known().map(format).orElseGet(() -> sentence(e.whyUnknown().orElseThrow()));
+    }
+
+    /** The value, or a dash whose reason is collected to be printed once under the table. */
+    private static <T> String orDash(Estimate<T> e, java.util.function.Function<T, String> format,
+                                     java.util.Set<String> reasons) {
+        if (e.isKnown()) {
+            return e.known().map(format).orElseThrow();
+        }
+        reasons.add(e.whyUnknown().orElseThrow());
+        return "—";
+    }
+
+    /** Capitalised, ending with a full stop. */
+    static String sentence(String s) {
+        String t = s.strip();
+        if (t.isEmpty()) {
+            return t;
+        }
+        t = Character.toUpperCase(t.charAt(0)) + t.substring(1);
+        return t.endsWith(".") ? t : t + ".";
     }
 
 }

@@ -157,10 +157,18 @@ public final class WorksheetPdf {
         return new Font(base, size);
     }
 
+    /**
+     * A section heading. Space above comes from the leading, not from paragraph spacing: OpenPDF writes spacing
+     * as a blank text line, which some extractors merge into the heading ("I nputs").
+     */
     Paragraph heading(String text) {
-        Paragraph p = new Paragraph(text, heading);
-        p.setSpacingBefore(10);
-        p.setSpacingAfter(4);
+        return subheading(text, heading, 12);
+    }
+
+    /** A one-line heading with {@code above} points of extra space above it. */
+    Paragraph subheading(String text, Font f, float above) {
+        Paragraph p = new Paragraph(text, f);
+        p.setLeading(f.getSize() * 1.3f + above);
         return p;
     }
 
@@ -329,7 +337,6 @@ public final class WorksheetPdf {
             Paragraph local = text("LOCAL PROTOCOL: this rule set differs from the one shipped with the tool. "
                     + "Its thresholds are the local team's responsibility; check them against the local protocol.",
                     bodyBold);
-            local.setSpacingBefore(4);
             doc.add(local);
         }
     }

@@ -83,6 +83,31 @@ final class PdfProbe implements AutoCloseable {
         return fonts;
     }
 
+    /** How many raster images the pages use (directly or inside forms). */
+    int rasterImages() throws IOException {
+        int n = 0;
+        for (PDPage page : doc.getPages()) {
+            n += rasterImages(page.getResources());
+        }
+        return n;
+    }
+
+    private static int rasterImages(org.apache.pdfbox.pdmodel.PDResources res) throws IOException {
+        if (res == null) {
+            return 0;
+        }
+        int n = 0;
+        for (COSName name : res.getXObjectNames()) {
+            var x = res.getXObject(name);
+            if (x instanceof org.apache.pdfbox.pdmodel.graphics.image.PDImageXObject) {
+                n++;
+            } else if (x instanceof org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject form) {
+                n += rasterImages(form.getResources());
+            }
+        }
+        return n;
+    }
+
     @Override
     public void close() throws IOException {
         doc.close();

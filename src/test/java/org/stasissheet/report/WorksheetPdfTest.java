@@ -15,7 +15,14 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.junit.jupiter.params.provider.ValueSource;
+import java.util.List;
+import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.files.WorksheetPdfs;
+import org.stasissheet.flow.FlowCaveats;
+import org.stasissheet.flow.WhatIf;
+import org.stasissheet.intake.Case;
+import org.stasissheet.measure.Analyte;
+import org.stasissheet.measure.Numbers;
 import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
@@ -150,6 +157,98 @@ class WorksheetPdfTest {
              PdfProbe b = new PdfProbe(render(LABEL, PdfOptions.defaults("t")))) {
             assertEquals(a.allText(), b.allText());
             assertTrue(a.allText().contains("2026-03-05 03:05 +01:00"), "generation time as passed in");
+        }
+    }
+
+    @Nested
+    @DisplayName("the flow estimate")
+    class Flow {
+        @Test
+        @DisplayName("is a vector chart with real text: axes, reference line, legend, values and every caveat")
+        void chartIsVectorWithText() throws IOException {
+            Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+            byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL));
+            try (PdfProbe pdf = new PdfProbe(bytes)) {
+                String text = squash(pdf.allText());
+                for (String expected : List.of("Microvascular flow estimate", "vessel diameter (µm, log scale)",
+                        "relative flow (patient ÷ reference)", "1.0 = reference", "patient, in vitro law (Pries 1992)",
+                        "patient, in vivo law (Pries 1994)", "10 µm", "What this estimate leaves out")) {
+                    assertTrue(text.contains(expected), "missing: " + expected);
+                }
+                for (WhatIf w : sheet.flow().whatIf()) {
+                    if (w.byDiameter().isKnown()) {
+                        assertTrue(text.contains("what-if: " + w.name()), "legend lacks " + w.name());
+                    }
+                }
+                for (String caveat : FlowCaveats.ALL) {
+                    assertTrue(text.contains(squash(caveat)), "caveat missing: " + caveat);
+                }
+                assertEquals(0, pdf.rasterImages(), "the chart must be vector graphics, not a picture");
+            }
+        }
+
+        @Test
+        @DisplayName("the values table shows the worksheet's relative flow at 10 µm, as computed by the core")
+        void tableMatchesTheWorksheet() throws IOException {
+            Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+            double at10 = sheet.flow().byDiameter().known().orElseThrow().stream()
+                    .filter(p -> p.diameterUm() == 10).findFirst().orElseThrow().relativeFlow();
+            byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL));
+            try (PdfProbe pdf = new PdfProbe(bytes)) {
+                assertTrue(squash(pdf.allText()).contains("patient, in vitro law (Pries 1992) "
+                        + Numbers.rounded(sheet.flow().byDiameter().known().orElseThrow().get(1).relativeFlow(), 3)
+                        + " " + Numbers.rounded(at10, 3)), squash(pdf.allText()));
+            }
+        }
+
+        @Test
+        @DisplayName("without a hematocrit the PDF says why there is no estimate instead of drawing one")
+        void noHematocrit_saysSo() throws IOException {
+            Case c = Fixtures.igmCase(LABEL);
+            Case without = new Case(c.patient(), c.condition(), c.labs().without(Analyte.HEMATOCRIT), c.baseline(),
+                    c.findings(), c.plan(), c.assessedAt(), c.assessor(), c.extraJson());
+            Worksheet sheet = Fixtures.sheet(without, Fixtures.SHIPPED);
+            String reason = sheet.flow().byDiameter().whyUnknown().orElseThrow();
+            byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL));
+            try (PdfProbe pdf = new PdfProbe(bytes)) {
+                String text = squash(pdf.allText());
+                assertTrue(text.contains("No flow chart. " + squash(PdfEstimateSections.sentence(reason))), text);
+                assertFalse(text.contains("vessel diameter (µm, log scale)"), "no chart without a hematocrit");
+                assertTrue(text.contains(squash(FlowCaveats.ALL.get(0))), "the caveats stay");
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("the apheresis table carries the worksheet's volumes and every exchange row")
+    void apheresisTable() throws IOException {
+        Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+        byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                Fixtures.caseJson(LABEL));
+        try (PdfProbe pdf = new PdfProbe(bytes)) {
+            String text = squash(pdf.allText());
+            assertTrue(text.contains("Total blood volume (Nadler)"), text);
+            assertTrue(text.contains(Numbers.rounded(sheet.apheresis().bloodVolumeL().known().orElseThrow(), 3) + " L"));
+            for (ExchangeRow row : sheet.apheresis().exchanges()) {
+                assertTrue(text.contains(Numbers.rounded(row.intravascularRemaining() * 100, 3) + " %"),
+                        "exchange row " + row.plasmaVolumes());
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("a full worksheet runs over several pages, each with the cautions and its page number")
+    void fullWorksheet_isMultiPage() throws IOException {
+        try (PdfProbe pdf = new PdfProbe(render(LABEL, PdfOptions.defaults("t")))) {
+            assertTrue(pdf.pages() >= 2, "pages: " + pdf.pages());
+            for (int n = 1; n <= pdf.pages(); n++) {
+                String text = squash(pdf.page(n));
+                assertTrue(text.contains(squash(Cautions.SHORT)), "page " + n);
+                assertTrue(text.contains("Page " + n + " of " + pdf.pages()), "page " + n);
+            }
         }
     }
 }
