@@ -10,9 +10,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.stasissheet.files.RuleSources;
 import org.stasissheet.files.WorksheetPdfs;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.CaseReader;
+import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.RuleSet;
 
 /**
@@ -82,8 +84,17 @@ final class Inputs {
         throw new InvalidInputException(lines);
     }
 
+    /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
     static RuleSet ruleSet(Optional<Path> dir) {
-        throw new InvalidInputException("loading rule sets lands with the rules work");
+        LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);
+        if (result instanceof LoadResult.Refused refused) {
+            List<String> lines = new ArrayList<>();
+            lines.add("The rule set " + dir.map(Path::toString).orElse("(shipped)")
+                    + " was refused; nothing of it was used:");
+            refused.problems().forEach(p -> lines.add("  " + p));
+            throw new InvalidInputException(lines);
+        }
+        return ((LoadResult.Loaded) result).ruleSet();
     }
 
     private static byte[] readLimited(Path file, int limit) {

@@ -55,6 +55,20 @@ public record TriageRow(String file, String patient, Status status, Optional<Lev
         }
     }
 
+    /** A case that was assessed and whose worksheet PDF was written as {@code pdf}. */
+    public static TriageRow assessed(String file, org.stasissheet.worksheet.Worksheet sheet, String pdf,
+                                     boolean withIdentifiers) {
+        Optional<Level> highest = sheet.flags().stream().map(org.stasissheet.rules.Flag::level)
+                .min(java.util.Comparator.naturalOrder());
+        String top = sheet.flags().stream().min(java.util.Comparator.comparing(org.stasissheet.rules.Flag::level))
+                .map(f -> f.title()).orElse("");
+        OptionalInt score = sheet.leukostasis().score().map(OptionalInt::of).orElse(OptionalInt.empty());
+        return new TriageRow(file, withIdentifiers ? sheet.source().patient().label() : "", Status.OK, highest,
+                VerdictWords.hyperviscosity(sheet.hyperviscosity()), VerdictWords.leukostasis(sheet.leukostasis()),
+                VerdictWords.tumorLysis(sheet.tumorLysis()), top, score,
+                VerdictWords.hyperviscosityRank(sheet.hyperviscosity()), pdf, "");
+    }
+
     /** A file the batch could not assess: it keeps its place in the summary with the reason. */
     public static TriageRow failed(String file, Status status, String message) {
         if (status == Status.OK) {

@@ -109,6 +109,7 @@ public final class WorksheetPdf {
             doc.open();
             attachCase(writer);
             header(doc);
+            PdfVerdictSections.verdicts(this, doc);
             inputs(doc);
             caseDetails(doc);
             PdfEstimateSections.flow(this, doc, writer);

@@ -5,7 +5,7 @@ import java.time.OffsetDateTime;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.Optional;
-import org.stasissheet.apheresis.EstimateFixtures;
+import org.stasissheet.files.RuleSources;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Condition;
 import org.stasissheet.intake.Cryoglobulin;
@@ -20,6 +20,7 @@ import org.stasissheet.intake.Plan;
 import org.stasissheet.intake.Retinopathy;
 import org.stasissheet.intake.Sex;
 import org.stasissheet.measure.Analyte;
+import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.rules.RuleSet;
 import org.stasissheet.worksheet.Assessor;
@@ -75,6 +76,16 @@ final class Fixtures {
 
     /** The worksheet of a case under a rule set with this provenance. */
     static Worksheet sheet(Case c, Provenance provenance) {
-        return Assessor.assess(c, new RuleSet(provenance, "test rule set", EstimateFixtures.rules().parameters()));
+        return Assessor.assess(c, withProvenance(provenance));
+    }
+
+    /** The shipped rule set (real rules and parameters) under another provenance, e.g. a local one. */
+    static RuleSet withProvenance(Provenance provenance) {
+        RuleSet shipped = shipped();
+        return new RuleSet(provenance, shipped.description(), shipped.parameters(), shipped.rules());
+    }
+
+    static RuleSet shipped() {
+        return ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
     }
 }
