@@ -23,6 +23,8 @@ import org.stasissheet.flow.WhatIf;
 import org.stasissheet.intake.Case;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.Level;
 import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
@@ -248,6 +250,53 @@ class WorksheetPdfTest {
                 String text = squash(pdf.page(n));
                 assertTrue(text.contains(squash(Cautions.SHORT)), "page " + n);
                 assertTrue(text.contains("Page " + n + " of " + pdf.pages()), "page " + n);
+            }
+        }
+    }
+
+    @Nested
+    @DisplayName("verdicts and flags")
+    class VerdictsAndFlags {
+        @Test
+        @DisplayName("every flag shows its level word and symbol, and cites its source by a number in the list")
+        void everyFlagCitesANumberedSource() throws IOException {
+            Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+            assertFalse(sheet.flags().isEmpty(), "the invented IgM case fires rules");
+            byte[] bytes = WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL));
+            try (PdfProbe pdf = new PdfProbe(bytes)) {
+                String text = squash(pdf.allText());
+                int list = text.lastIndexOf("Sources cited");
+                assertTrue(list > 0, "the numbered source list is there");
+                String sources = text.substring(list);
+                for (Flag f : sheet.flags()) {
+                    int at = text.indexOf(squash(f.title()));
+                    assertTrue(at >= 0 && at < list, "flag shown before the list: " + f.id());
+                    java.util.regex.Matcher m = java.util.regex.Pattern.compile("Source \\[(\\d+)\\][^\\[]*rule "
+                            + java.util.regex.Pattern.quote(f.id())).matcher(text);
+                    assertTrue(m.find(), "flag " + f.id() + " cites a numbered source");
+                    String entry = "[" + m.group(1) + "] " + squash(f.source());
+                    assertTrue(sources.contains(entry), "source list lacks " + entry);
+                }
+                for (Level level : Level.values()) {
+                    if (sheet.flags().stream().anyMatch(f -> f.level() == level)) {
+                        assertTrue(text.contains(level.badge()), "group heading " + level.badge());
+                    }
+                }
+            }
+        }
+
+        @Test
+        @DisplayName("the three verdicts appear in words")
+        void verdictsInWords() throws IOException {
+            Worksheet sheet = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+            try (PdfProbe pdf = new PdfProbe(WorksheetPdf.render(sheet, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL)))) {
+                String text = squash(pdf.allText());
+                assertTrue(text.contains(VerdictWords.hyperviscosity(sheet.hyperviscosity())), text);
+                assertTrue(text.contains(VerdictWords.leukostasis(sheet.leukostasis())), text);
+                assertTrue(text.contains("Tumor lysis"), text);
+                assertTrue(text.contains("laboratory " + VerdictWords.yesNo(sheet.tumorLysis().laboratory())), text);
             }
         }
     }
