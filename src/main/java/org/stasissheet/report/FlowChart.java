@@ -223,7 +223,7 @@ final class FlowChart {
         t.beginText();
         t.setColorFill(Color.BLACK);
         t.setFontAndSize(font, 7.5f);
-        t.showTextAligned(PdfContentByte.ALIGN_LEFT, text, x, y, 0);
+        t.showTextAligned(PdfContentByte.ALIGN_LEFT, PdfFonts.printable(text), x, y, 0);
         t.endText();
     }
 

@@ -42,19 +42,20 @@ final class PdfEstimateSections {
         }
         doc.add(pdf.heading("Microvascular flow estimate"));
         if (flow.byDiameter().whyUnknown().isPresent()) {
-            doc.add(pdf.text("No flow chart. " + sentence(flow.byDiameter().whyUnknown().get()), pdf.bodyBold()));
+            doc.add(pdf.loose(pdf.text("No flow chart. " + sentence(flow.byDiameter().whyUnknown().get()),
+                    pdf.bodyBold())));
             caveats(pdf, doc, flow.caveats());
             return;
         }
         int poiseuille = pdf.sources().cite(EstimateSources.POISEUILLE);
         int vitro = pdf.sources().cite(EstimateSources.PRIES_1992);
         int vivo = pdf.sources().cite(EstimateSources.PRIES_1994);
-        doc.add(pdf.text("Flow through a vessel at the same pressure, patient ÷ reference [" + poiseuille + "]; "
+        doc.add(pdf.loose(pdf.text("Flow through a vessel at the same pressure, patient ÷ reference [" + poiseuille + "]; "
                 + "apparent viscosity = plasma ratio × blood viscosity law [" + vitro + "], [" + vivo + "]. "
                 + "Hematocrit used " + flow.hematocrit().known().map(h -> Numbers.rounded(h, 3)).orElse("—")
                 + ", plasma ratio " + Numbers.rounded(flow.plasmaRatio(), 3) + " (" + flow.plasmaRatioBasis()
                 + "). Reference: hematocrit " + Numbers.plain(flow.referenceHematocrit()) + ", serum viscosity "
-                + Numbers.plain(flow.referenceSerumViscosity()) + ".", pdf.small()));
+                + Numbers.plain(flow.referenceSerumViscosity()) + ".", pdf.small())));
         List<NamedSeries> series = series(pdf, flow);
         List<FlowChart.Series> chart = series.stream().map(NamedSeries::chart).toList();
         float width = pdf.contentWidth();

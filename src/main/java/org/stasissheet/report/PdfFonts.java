@@ -15,6 +15,40 @@ final class PdfFonts {
     private PdfFonts() {
     }
 
+    /**
+     * The text with subscript and superscript digits written as plain digits where Liberation Sans has no glyph
+     * for them (it lacks U+2080–U+2089), so "O₂" prints as "O2" instead of losing the digit.
+     */
+    static String printable(String text) {
+        StringBuilder sb = null;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            char plain = plainDigit(c);
+            if (plain != c && !regular().charExists(c)) {
+                if (sb == null) {
+                    sb = new StringBuilder(text.substring(0, i));
+                }
+                sb.append(plain);
+            } else if (sb != null) {
+                sb.append(c);
+            }
+        }
+        return sb == null ? text : sb.toString();
+    }
+
+    private static char plainDigit(char c) {
+        if (c >= '\u2080' && c <= '\u2089') {
+            return (char) ('0' + (c - '\u2080'));
+        }
+        return switch (c) {
+            case '\u2070' -> '0';
+            case '\u00b9' -> '1';
+            case '\u00b2' -> '2';
+            case '\u00b3' -> '3';
+            default -> (c >= '\u2074' && c <= '\u2079') ? (char) ('0' + (c - '\u2070')) : c;
+        };
+    }
+
     static BaseFont regular() {
         return Holder.REGULAR;
     }

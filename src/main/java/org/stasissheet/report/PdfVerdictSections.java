@@ -56,17 +56,12 @@ final class PdfVerdictSections {
         grade(parts, LeukostasisVerdict.Organ.PULMONARY, f.pulmonaryGrade());
         grade(parts, LeukostasisVerdict.Organ.NEUROLOGICAL, f.neurologicalGrade());
         grade(parts, LeukostasisVerdict.Organ.OTHER, f.otherOrganGrade());
-        return "Grades: " + String.join("; ", parts) + ". " + capitalised(LeukostasisVerdict.COMBINATION_RULE)
-                + " (descriptors and combination rule from memory).";
+        return "Grades: " + String.join("; ", parts) + " (descriptors from memory).";
     }
 
     private static void grade(List<String> parts, LeukostasisVerdict.Organ organ, Optional<Integer> g) {
         parts.add(organ.label() + " " + g.map(v -> v + " (" + LeukostasisVerdict.descriptor(organ, v) + ")")
                 .orElse("not assessed"));
-    }
-
-    private static String capitalised(String s) {
-        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     private static String criteria(TumorLysisVerdict tl) {
@@ -97,13 +92,14 @@ final class PdfVerdictSections {
             doc.add(head);
             PdfPTable t = new PdfPTable(new float[] {0.9f, 7f});
             t.setWidthPercentage(100);
+            t.setSpacingBefore(3);
             t.setSpacingAfter(3);
             for (Flag f : group) {
                 PdfPCell badge = pdf.cell("[" + level.symbol() + "]\n" + level.word(), pdf.bodyBold());
                 t.addCell(badge);
                 Phrase p = new Phrase();
-                p.add(new Chunk(f.title() + "\n", pdf.bodyBold()));
-                p.add(new Chunk(f.explanation() + "\n", pdf.body()));
+                p.add(new Chunk(PdfFonts.printable(f.title()) + "\n", pdf.bodyBold()));
+                p.add(new Chunk(PdfFonts.printable(f.explanation()) + "\n", pdf.body()));
                 int n = pdf.sources().cite(f.source());
                 p.add(new Chunk("Source [" + n + "] · basis: " + basisWords(f.basis()) + " · rule " + f.id(),
                         f.basis() == Basis.FROM_MEMORY ? pdf.smallItalic() : pdf.small()));

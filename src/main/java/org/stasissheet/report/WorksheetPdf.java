@@ -168,14 +168,20 @@ public final class WorksheetPdf {
 
     /** A one-line heading with {@code above} points of extra space above it. */
     Paragraph subheading(String text, Font f, float above) {
-        Paragraph p = new Paragraph(text, f);
+        Paragraph p = new Paragraph(PdfFonts.printable(text), f);
         p.setLeading(f.getSize() * 1.3f + above);
         return p;
     }
 
     Paragraph text(String text, Font f) {
-        Paragraph p = new Paragraph(text, f);
+        Paragraph p = new Paragraph(PdfFonts.printable(text), f);
         p.setLeading(f.getSize() * 1.3f);
+        return p;
+    }
+
+    /** The paragraph with 3 points more leading: the first text under a heading, so the two do not touch. */
+    Paragraph loose(Paragraph p) {
+        p.setLeading(p.getLeading() + 3);
         return p;
     }
 
@@ -183,6 +189,8 @@ public final class WorksheetPdf {
         PdfPTable t = new PdfPTable(widths);
         t.setWidthPercentage(100);
         t.setHeaderRows(1);
+        // table spacing moves the cursor without writing text, unlike paragraph spacing
+        t.setSpacingBefore(4);
         t.setSpacingAfter(4);
         return t;
     }
@@ -196,7 +204,7 @@ public final class WorksheetPdf {
     }
 
     PdfPCell cell(String text, Font f) {
-        PdfPCell c = new PdfPCell(new Phrase(text, f));
+        PdfPCell c = new PdfPCell(new Phrase(PdfFonts.printable(text), f));
         c.setPadding(3);
         c.setBorderColor(RULE_GREY);
         c.setBorderWidth(0.5f);
@@ -253,7 +261,7 @@ public final class WorksheetPdf {
         PdfPTable t = table(2.2f, 1.6f, 1.6f, 1.8f);
         headerCells(t, "Value", "as entered", "canonical units", "case-file key");
         for (InputLine line : sheet.inputs()) {
-            t.addCell(cell(line.label(), body));
+            t.addCell(cell(line.path().startsWith("baseline.") ? line.label() + " (baseline)" : line.label(), body));
             t.addCell(cell(quantity(line.entered()), body));
             t.addCell(cell(line.entered().equals(line.canonical()) ? "(same)" : quantity(line.canonical()), body));
             t.addCell(cell(line.path(), small));
@@ -409,7 +417,8 @@ public final class WorksheetPdf {
                 if (!first) {
                     p.add(Chunk.NEWLINE);
                 }
-                p.add(new Chunk(caution, font(first ? PdfFonts.bold() : PdfFonts.regular(), 7.5f)));
+                p.add(new Chunk(PdfFonts.printable(caution),
+                        font(first ? PdfFonts.bold() : PdfFonts.regular(), 7.5f)));
                 first = false;
             }
             ct.addElement(p);
@@ -444,7 +453,7 @@ public final class WorksheetPdf {
             cb.beginText();
             cb.setFontAndSize(PdfFonts.regular(), FOOT_SIZE);
             cb.setColorFill(Color.BLACK);
-            cb.showTextAligned(Element.ALIGN_LEFT, fit(running, right - left - pageWidth - 12), left, y, 0);
+            cb.showTextAligned(Element.ALIGN_LEFT, fit(PdfFonts.printable(running), right - left - pageWidth - 12), left, y, 0);
             cb.showTextAligned(Element.ALIGN_LEFT, pageText, right - pageWidth, y, 0);
             cb.endText();
             cb.addTemplate(total, right - pageWidth + PdfFonts.regular().getWidthPoint(pageText, FOOT_SIZE), y);
