@@ -96,6 +96,11 @@ final class PdfVerdictSections {
             t.setSpacingAfter(3);
             for (Flag f : group) {
                 PdfPCell badge = pdf.cell("[" + level.symbol() + "]\n" + level.word(), pdf.bodyBold());
+                PdfPCell body = pdf.cell(new Phrase());
+                if (level == Level.ACT_NOW) {
+                    // a heavier frame as well as the word and symbol, so the urgent rows stand out in grey print
+                    badge.setBorderWidth(1.6f);
+                }
                 t.addCell(badge);
                 Phrase p = new Phrase();
                 p.add(new Chunk(PdfFonts.printable(f.title()) + "\n", pdf.bodyBold()));
@@ -103,7 +108,11 @@ final class PdfVerdictSections {
                 int n = pdf.sources().cite(f.source());
                 p.add(new Chunk("Source [" + n + "] · basis: " + basisWords(f.basis()) + " · rule " + f.id(),
                         f.basis() == Basis.FROM_MEMORY ? pdf.smallItalic() : pdf.small()));
-                t.addCell(pdf.cell(p));
+                body = pdf.cell(p);
+                if (level == Level.ACT_NOW) {
+                    body.setBorderWidth(1.6f);
+                }
+                t.addCell(body);
             }
             doc.add(t);
         }

@@ -96,7 +96,7 @@ public final class WorksheetPdf {
     private byte[] render() {
         ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
         Rectangle page = options.paper().size();
-        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + CAUTION_BAND, MARGIN + FOOTER_BAND - 10);
+        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + CAUTION_BAND - 8, MARGIN + FOOTER_BAND - 10);
         try {
             PdfWriter writer = PdfWriter.getInstance(doc, out);
             writer.setPageEvent(new PageFrame());
