@@ -72,21 +72,21 @@ public final class RequiredParameters {
             of(TLS_CHILD_BELOW_AGE, Dimension.AGE),
             of(TLS_WINDOW_BEFORE, Dimension.DURATION),
             of(TLS_WINDOW_AFTER, Dimension.DURATION),
-            // read by the flow and apheresis estimates
-            of("flow.referenceHematocrit", Dimension.FRACTION),
-            of("flow.referenceSerumViscosity", Dimension.VISCOSITY),
-            of("leukocrit.volume.myeloblast", Dimension.VOLUME),
-            of("leukocrit.volume.lymphoblast", Dimension.VOLUME),
-            of("leukocrit.volume.matureLymphocyte", Dimension.VOLUME),
-            of("transfusion.unitVolume", Dimension.VOLUME),
-            of("transfusion.unitRedCellVolume", Dimension.VOLUME),
-            of("exchange.intravascularFraction.IgM", Dimension.FRACTION),
-            of("exchange.intravascularFraction.IgG", Dimension.FRACTION),
-            of("exchange.intravascularFraction.IgA", Dimension.FRACTION),
-            of("leukapheresis.processBloodVolumesLow", Dimension.FRACTION),
-            of("leukapheresis.processBloodVolumesHigh", Dimension.FRACTION),
-            of("leukapheresis.reductionLow", Dimension.FRACTION),
-            of("leukapheresis.reductionHigh", Dimension.FRACTION));
+            // read by the flow and apheresis estimates (ids in EstimateParameters)
+            of(EstimateParameters.REFERENCE_HEMATOCRIT, Dimension.FRACTION),
+            of(EstimateParameters.REFERENCE_SERUM_VISCOSITY, Dimension.VISCOSITY),
+            of(EstimateParameters.VOLUME_MYELOBLAST, Dimension.VOLUME),
+            of(EstimateParameters.VOLUME_LYMPHOBLAST, Dimension.VOLUME),
+            of(EstimateParameters.VOLUME_MATURE_LYMPHOCYTE, Dimension.VOLUME),
+            of(EstimateParameters.TRANSFUSION_UNIT_VOLUME, Dimension.VOLUME),
+            of(EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME, Dimension.VOLUME),
+            of(EstimateParameters.INTRAVASCULAR_FRACTION_IGM, Dimension.FRACTION),
+            of(EstimateParameters.INTRAVASCULAR_FRACTION_IGG, Dimension.FRACTION),
+            of(EstimateParameters.INTRAVASCULAR_FRACTION_IGA, Dimension.FRACTION),
+            of(EstimateParameters.PROCESS_BLOOD_VOLUMES_LOW, Dimension.FRACTION),
+            of(EstimateParameters.PROCESS_BLOOD_VOLUMES_HIGH, Dimension.FRACTION),
+            of(EstimateParameters.WBC_REDUCTION_LOW, Dimension.FRACTION),
+            of(EstimateParameters.WBC_REDUCTION_HIGH, Dimension.FRACTION));
 
     private static Required analyte(String id, Analyte a) {
         return new Required(id, Optional.of(a), Dimension.of(a.canonicalUnit()).orElse(Dimension.FRACTION));

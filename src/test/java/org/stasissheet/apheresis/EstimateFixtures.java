@@ -1,5 +1,7 @@
 package org.stasissheet.apheresis;
 
+import org.stasissheet.rules.EstimateParameters;
+
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
