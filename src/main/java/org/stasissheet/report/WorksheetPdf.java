@@ -105,8 +105,11 @@ public final class WorksheetPdf {
             writer.setStrictImageSequence(true);
             doc.addTitle(TITLE);
             doc.addCreator("Stasis Sheet " + options.toolVersion());
-            doc.addCreationDate(new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime())));
+            // both dates are the generation time handed in: the renderer reads no clock of its own
+            PdfDate generated = new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime()));
             doc.open();
+            writer.getInfo().put(com.lowagie.text.pdf.PdfName.CREATIONDATE, generated);
+            writer.getInfo().put(com.lowagie.text.pdf.PdfName.MODDATE, generated);
             attachCase(writer);
             header(doc);
             PdfVerdictSections.verdicts(this, doc);

@@ -45,6 +45,10 @@ final class PdfProbe implements AutoCloseable {
         return doc.getDocumentInformation().getTitle();
     }
 
+    java.time.Instant creationDate() {
+        return doc.getDocumentInformation().getCreationDate().toInstant();
+    }
+
     /** Every metadata value of the information dictionary, joined. */
     String allMetadata() {
         StringBuilder sb = new StringBuilder();

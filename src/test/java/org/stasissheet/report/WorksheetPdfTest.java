@@ -132,6 +132,7 @@ class WorksheetPdfTest {
             String meta = pdf.allMetadata();
             assertFalse(meta.contains("Invented"), meta);
             assertFalse(meta.contains("bed 4"), meta);
+            assertEquals(Fixtures.GENERATED.toInstant(), pdf.creationDate(), "the generation time handed in");
         }
     }
 
