@@ -2,6 +2,7 @@ package org.stasissheet.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Collectors;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Enums;
@@ -100,7 +101,7 @@ public final class HandoffNote {
         }
     }
 
-    private static String grade(java.util.Optional<Integer> g) {
+    private static String grade(Optional<Integer> g) {
         return g.map(String::valueOf).orElse("n/a");
     }
 

@@ -7,9 +7,13 @@ import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
+import java.awt.Color;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
+import java.util.function.Function;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.apheresis.ValueRange;
@@ -124,7 +128,7 @@ final class PdfEstimateSections {
 
     private static PdfPCell headerCell(WorksheetPdf pdf, String text) {
         PdfPCell c = pdf.cell(text, WorksheetPdf.font(PdfFonts.bold(), 7.5f));
-        c.setBackgroundColor(new java.awt.Color(0xee, 0xee, 0xee));
+        c.setBackgroundColor(new Color(0xee, 0xee, 0xee));
         return c;
     }
 
@@ -173,7 +177,7 @@ final class PdfEstimateSections {
         PdfPTable t = pdf.table(1.3f, 1.4f, 2f, 2f, 2.4f);
         pdf.headerCells(t, "plasma volumes", "volume", "intravascular left", "paraprotein after",
                 "serum viscosity after [" + projection + "]");
-        java.util.Set<String> reasons = new java.util.LinkedHashSet<>();
+        Set<String> reasons = new LinkedHashSet<>();
         for (ExchangeRow r : plan.exchanges()) {
             t.addCell(pdf.cell(Numbers.rounded(r.plasmaVolumes(), 3), pdf.body()));
             t.addCell(pdf.cell(orDash(r.volumeL(), x -> Numbers.rounded(x, 3) + " L", reasons), pdf.body()));
@@ -215,13 +219,13 @@ final class PdfEstimateSections {
     }
 
     /** The value, or the core's reason in its own words (it already says what was not estimated). */
-    private static <T> String known(Estimate<T> e, java.util.function.Function<T, String> format) {
+    private static <T> String known(Estimate<T> e, Function<T, String> format) {
         return e.known().map(format).orElseGet(() -> sentence(e.whyUnknown().orElseThrow()));
     }
 
     /** The value, or a dash whose reason is collected to be printed once under the table. */
-    private static <T> String orDash(Estimate<T> e, java.util.function.Function<T, String> format,
-                                     java.util.Set<String> reasons) {
+    private static <T> String orDash(Estimate<T> e, Function<T, String> format,
+                                     Set<String> reasons) {
         if (e.isKnown()) {
             return e.known().map(format).orElseThrow();
         }

@@ -1,9 +1,12 @@
 package org.stasissheet.report;
 
+import java.util.Comparator;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalInt;
+import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.Level;
+import org.stasissheet.worksheet.Worksheet;
 
 /**
  * One referral in a triage summary: a case that was assessed, or a file that could not be.
@@ -56,12 +59,10 @@ public record TriageRow(String file, String patient, Status status, Optional<Lev
     }
 
     /** A case that was assessed and whose worksheet PDF was written as {@code pdf}. */
-    public static TriageRow assessed(String file, org.stasissheet.worksheet.Worksheet sheet, String pdf,
-                                     boolean withIdentifiers) {
-        Optional<Level> highest = sheet.flags().stream().map(org.stasissheet.rules.Flag::level)
-                .min(java.util.Comparator.naturalOrder());
-        String top = sheet.flags().stream().min(java.util.Comparator.comparing(org.stasissheet.rules.Flag::level))
-                .map(f -> f.title()).orElse("");
+    public static TriageRow assessed(String file, Worksheet sheet, String pdf, boolean withIdentifiers) {
+        Optional<Level> highest = sheet.flags().stream().map(Flag::level).min(Comparator.naturalOrder());
+        // flags come most urgent first; the first of the highest level is the top flag
+        String top = sheet.flags().stream().min(Comparator.comparing(Flag::level)).map(Flag::title).orElse("");
         OptionalInt score = sheet.leukostasis().score().map(OptionalInt::of).orElse(OptionalInt.empty());
         return new TriageRow(file, withIdentifiers ? sheet.source().patient().label() : "", Status.OK, highest,
                 VerdictWords.hyperviscosity(sheet.hyperviscosity()), VerdictWords.leukostasis(sheet.leukostasis()),

@@ -13,10 +13,12 @@ import com.lowagie.text.Image;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Phrase;
 import com.lowagie.text.Rectangle;
+import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.ColumnText;
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfDate;
 import com.lowagie.text.pdf.PdfFileSpecification;
+import com.lowagie.text.pdf.PdfName;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfPageEventHelper;
@@ -32,6 +34,7 @@ import java.util.GregorianCalendar;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Enums;
 import org.stasissheet.intake.Findings;
@@ -108,8 +111,8 @@ public final class WorksheetPdf {
             // both dates are the generation time handed in: the renderer reads no clock of its own
             PdfDate generated = new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime()));
             doc.open();
-            writer.getInfo().put(com.lowagie.text.pdf.PdfName.CREATIONDATE, generated);
-            writer.getInfo().put(com.lowagie.text.pdf.PdfName.MODDATE, generated);
+            writer.getInfo().put(PdfName.CREATIONDATE, generated);
+            writer.getInfo().put(PdfName.MODDATE, generated);
             attachCase(writer);
             header(doc);
             PdfVerdictSections.verdicts(this, doc);
@@ -157,7 +160,7 @@ public final class WorksheetPdf {
         return smallItalic;
     }
 
-    static Font font(com.lowagie.text.pdf.BaseFont base, float size) {
+    static Font font(BaseFont base, float size) {
         return new Font(base, size);
     }
 
@@ -298,7 +301,7 @@ public final class WorksheetPdf {
         t.addCell(cell(value, body));
     }
 
-    private static String grade(java.util.Optional<Integer> g) {
+    private static String grade(Optional<Integer> g) {
         return g.map(String::valueOf).orElse("not assessed");
     }
 
