@@ -73,4 +73,15 @@ class TriageSummaryTest {
         assertEquals("b.json,,error,unknown,,,,,,\"labs.wbc: \"\"abc\"\" is not a number\"", lines[2]);
         assertEquals("", lines[3]);
     }
+
+    @Test
+    @DisplayName("an internal error keeps its own status word, and a failed row must say why")
+    void internalError() {
+        String csv = TriageSummary.csv(List.of(TriageRow.failed("c.json", TriageRow.Status.INTERNAL_ERROR,
+                "internal error (IllegalStateException): boom")));
+        assertEquals("c.json,,internal-error,unknown,,,,,,internal error (IllegalStateException): boom",
+                csv.split("\r\n")[1]);
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> TriageRow.failed("d.json", TriageRow.Status.ERROR, " "));
+    }
 }
