@@ -62,7 +62,8 @@ public final class WorksheetPdf {
     static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm xxx", Locale.ROOT);
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private static final float MARGIN = 40;
-    private static final float CAUTION_BAND = 50;
+    private static final float CAUTION_SIZE = 7.5f;
+    private static final float CAUTION_LEADING = 8.6f;
     private static final float FOOTER_BAND = 34;
     private static final Color RULE_GREY = new Color(0x88, 0x88, 0x88);
     private static final Color HEAD_FILL = new Color(0xee, 0xee, 0xee);
@@ -99,7 +100,8 @@ public final class WorksheetPdf {
     private byte[] render() {
         ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
         Rectangle page = options.paper().size();
-        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + CAUTION_BAND - 8, MARGIN + FOOTER_BAND - 10);
+        float band = cautionBandHeight(page.getWidth());
+        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + band - 8, MARGIN + FOOTER_BAND - 10);
         try {
             PdfWriter writer = PdfWriter.getInstance(doc, out);
             writer.setPageEvent(new PageFrame());
@@ -384,6 +386,23 @@ public final class WorksheetPdf {
         return s.isBlank() ? "—" : s;
     }
 
+    /**
+     * The height of the caution band: one line per caution, more where a caution wraps (measured in the font),
+     * so a longer caution makes the band taller instead of being cut short.
+     */
+    private float cautionBandHeight(float pageWidth) {
+        float width = pageWidth - 2 * MARGIN - 10;
+        int lines = 0;
+        boolean first = true;
+        for (String caution : sheet.cautions()) {
+            String text = first ? "[!] CAUTION  " + caution : caution;
+            BaseFont f = first ? PdfFonts.bold() : PdfFonts.regular();
+            lines += (int) Math.ceil(f.getWidthPoint(PdfFonts.printable(text), CAUTION_SIZE) * 1.05 / width);
+            first = false;
+        }
+        return Math.max(1, lines) * CAUTION_LEADING + 16;
+    }
+
     /** The cautions at the top of every page and "Page X of Y" with a short running footer at the foot. */
     private final class PageFrame extends PdfPageEventHelper {
         private PdfTemplate total;
@@ -406,7 +425,7 @@ public final class WorksheetPdf {
             float left = MARGIN;
             float right = page.getWidth() - MARGIN;
             float top = page.getHeight() - MARGIN + 14;
-            float bottom = top - CAUTION_BAND + 6;
+            float bottom = top - cautionBandHeight(page.getWidth()) + 6;
             cb.saveState();
             cb.setLineWidth(1.2f);
             cb.setColorStroke(Color.BLACK);
@@ -416,15 +435,15 @@ public final class WorksheetPdf {
             ColumnText ct = new ColumnText(cb);
             ct.setSimpleColumn(left + 5, bottom + 2, right - 5, top - 3);
             Paragraph p = new Paragraph();
-            p.setLeading(8.6f);
-            p.add(new Chunk("[!] CAUTION  ", font(PdfFonts.bold(), 7.5f)));
+            p.setLeading(CAUTION_LEADING);
+            p.add(new Chunk("[!] CAUTION  ", font(PdfFonts.bold(), CAUTION_SIZE)));
             boolean first = true;
             for (String caution : sheet.cautions()) {
                 if (!first) {
                     p.add(Chunk.NEWLINE);
                 }
                 p.add(new Chunk(PdfFonts.printable(caution),
-                        font(first ? PdfFonts.bold() : PdfFonts.regular(), 7.5f)));
+                        font(first ? PdfFonts.bold() : PdfFonts.regular(), CAUTION_SIZE)));
                 first = false;
             }
             ct.addElement(p);
@@ -453,7 +472,8 @@ public final class WorksheetPdf {
                     + (options.includeIdentifiers() && !sheet.source().patient().label().isBlank()
                             ? " · " + sheet.source().patient().label() : "")
                     + " · generated " + TIME.format(generatedAt)
-                    + " · rule set " + sheet.ruleSet().name() + " " + sheet.ruleSet().version();
+                    + " · rule set " + sheet.ruleSet().name() + " " + sheet.ruleSet().version()
+                    + (sheet.ruleSet().local() ? " (LOCAL PROTOCOL)" : "");
             String pageText = "Page " + number + " of ";
             float pageWidth = PdfFonts.regular().getWidthPoint(pageText + "999", FOOT_SIZE);
             cb.beginText();

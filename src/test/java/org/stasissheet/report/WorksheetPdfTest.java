@@ -60,6 +60,26 @@ class WorksheetPdfTest {
         }
 
         @Test
+        @DisplayName("a long caution makes the band taller instead of being cut short")
+        void longCaution_isPrintedWhole() throws IOException {
+            Worksheet s = Fixtures.sheet(Fixtures.igmCase(LABEL), Fixtures.SHIPPED);
+            String longer = "Invented extra caution for this test, long enough to wrap over two or three lines of the "
+                    + "band at this size: every word of it must still be printed on every page, because a caution "
+                    + "that is cut short is no caution at all, and nobody reads the part that is missing.";
+            List<String> cautions = new java.util.ArrayList<>(s.cautions());
+            cautions.add(longer);
+            Worksheet more = new Worksheet(s.source(), s.ruleSet(), s.inputs(), cautions, s.flow(), s.apheresis(),
+                    s.hyperviscosity(), s.leukostasis(), s.tumorLysis(), s.flags());
+            byte[] bytes = WorksheetPdf.render(more, PdfOptions.defaults("t"), Fixtures.GENERATED,
+                    Fixtures.caseJson(LABEL));
+            try (PdfProbe pdf = new PdfProbe(bytes)) {
+                for (int n = 1; n <= pdf.pages(); n++) {
+                    assertTrue(squash(pdf.page(n)).contains(squash(longer)), "page " + n);
+                }
+            }
+        }
+
+        @Test
         @DisplayName("the paper option sets the page size (A4 595 × 842 pt, Letter 612 × 792 pt, ISO 216 / ANSI)")
         void paperSizes() throws IOException {
             try (var a4 = org.apache.pdfbox.Loader.loadPDF(render(LABEL, new PdfOptions(Paper.A4, true, "t")));
