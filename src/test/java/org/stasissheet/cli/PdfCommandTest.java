@@ -61,6 +61,16 @@ class PdfCommandTest {
     }
 
     @Test
+    @DisplayName("a teaching copy (--no-identifiers) still reads back to the same assessment, without the label")
+    void teachingCopy_assessesTheSame() throws IOException {
+        Path pdf = dir.resolve("teach.pdf");
+        runOut("pdf", SAMPLE.toString(), "-o", pdf.toString(), "--no-identifiers");
+        assertEquals(runOut("assess", SAMPLE.toString(), "--json"), runOut("assess", pdf.toString(), "--json"));
+        String embedded = new String(WorksheetPdfs.extractCase(Files.readAllBytes(pdf)), StandardCharsets.UTF_8);
+        assertFalse(embedded.contains("Demo patient A"), embedded);
+    }
+
+    @Test
     @DisplayName("a worksheet PDF works as the input of pdf and note too, also without the .pdf name")
     void pdfAsInput_recognisedByContent() throws IOException {
         Path pdf = dir.resolve("sheet.pdf");
