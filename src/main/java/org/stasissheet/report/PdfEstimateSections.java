@@ -147,7 +147,7 @@ final class PdfEstimateSections {
         Paragraph head = pdf.subheading("What-if assumptions", pdf.bodyBold(), 3);
         doc.add(head);
         for (WhatIf w : flow.whatIf()) {
-            String text = w.byDiameter().whyUnknown().map(r -> "not drawn: " + r)
+            String text = w.byDiameter().whyUnknown().map(r -> "not drawn. " + sentence(r))
                     .orElse(String.join(" ", w.assumptions()));
             doc.add(pdf.text("• " + w.name() + ": " + text, pdf.small()));
         }
