@@ -11,7 +11,8 @@ final class PdfLayoutOptions {
     Paper paper;
 
     @Option(names = "--no-identifiers",
-            description = "leave the patient label out of the whole PDF (teaching or audit copies)")
+            description = "leave the patient label out: of the whole PDF, and of summary.csv in triage "
+                    + "(teaching or audit copies)")
     boolean noIdentifiers;
 
     PdfOptions options() {
