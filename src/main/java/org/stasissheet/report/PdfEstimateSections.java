@@ -86,7 +86,8 @@ final class PdfEstimateSections {
                     lk.get().byDiameter()));
         }
         for (WhatIf w : flow.whatIf()) {
-            w.byDiameter().known().ifPresent(p -> list.add(named("what-if: " + w.name(), p)));
+            String suffix = w.changes() == WhatIf.Changes.LEUKOCRIT_ONLY ? " (with leukocrit)" : "";
+            w.movedSeries().known().ifPresent(p -> list.add(named("what-if: " + w.name() + suffix, p)));
         }
         return list;
     }
@@ -94,7 +95,7 @@ final class PdfEstimateSections {
     private static int seriesCount(FlowEstimates flow) {
         int n = (flow.byDiameter().isKnown() ? 1 : 0) + (flow.inVivo().isKnown() ? 1 : 0)
                 + (flow.leukocrit().isKnown() ? 1 : 0);
-        return n + (int) flow.whatIf().stream().filter(w -> w.byDiameter().isKnown()).count();
+        return n + (int) flow.whatIf().stream().filter(w -> w.movedSeries().isKnown()).count();
     }
 
     private static NamedSeries named(String label, List<FlowPoint> points) {
