@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -27,7 +28,7 @@ class StartupLoadingTest {
 
     @ParameterizedTest(name = "stasis {0}")
     @ValueSource(strings = {"--help", "--version", "assess --help", "assess samples/igm-symptomatic.json",
-        "assess --json samples/cll-extreme.json"})
+        "assess --json samples/cll-extreme.json", "note samples/aml-breathless.json", "rules list"})
     @DisplayName("a command-line run loads no JavaFX and no PDF class")
     void commandLine_loadsNeitherToolkitNorPdf(String args) throws Exception {
         List<String> loaded = classesLoadedBy(args.split(" "));
@@ -35,6 +36,15 @@ class StartupLoadingTest {
         assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("javafx.") || c.startsWith("com.sun.javafx.")
                 || c.startsWith("com.sun.glass.") || c.startsWith("com.sun.prism.")).toList());
         assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isPdfOrFont).toList());
+    }
+
+    @Test
+    @DisplayName("pdf loads the PDF library (so the check above can see it) and still no JavaFX")
+    void pdf_loadsPdfButNoToolkit() throws Exception {
+        List<String> loaded = classesLoadedBy("pdf", "samples/igm-symptomatic.json", "-o", dir.resolve("w.pdf").toString());
+        assertTrue(loaded.stream().anyMatch(c -> c.startsWith("com.lowagie.text.pdf.")), "OpenPDF was loaded");
+        assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("javafx.")).toList());
+        assertTrue(Files.size(dir.resolve("w.pdf")) > 0, "the PDF was written");
     }
 
     static boolean isPdfOrFont(String className) {

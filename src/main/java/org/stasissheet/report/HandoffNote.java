@@ -56,7 +56,7 @@ public final class HandoffNote {
         }
         lines.add("Rule set " + sheet.ruleSet().name() + " " + sheet.ruleSet().version() + " (sha256 "
                 + sheet.ruleSet().shortHash() + ")" + (sheet.ruleSet().local() ? ", LOCAL PROTOCOL" : "")
-                + ", assessed " + c.assessedAt().map(WorksheetPdf.TIME::format).orElse("at an unrecorded time")
+                + ", assessed " + c.assessedAt().map(ReportTime.FORMAT::format).orElse("at an unrecorded time")
                 + ". " + Cautions.SHORT);
         return String.join(NL, lines) + NL;
     }

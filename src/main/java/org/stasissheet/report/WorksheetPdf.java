@@ -59,7 +59,7 @@ public final class WorksheetPdf {
     /** The name of the embedded case file, which {@code files.WorksheetPdfs} looks for when reading a PDF back. */
     public static final String ATTACHMENT_NAME = "stasis-case.json";
 
-    static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm xxx", Locale.ROOT);
+    static final DateTimeFormatter TIME = ReportTime.FORMAT;
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private static final float MARGIN = 40;
     private static final float CAUTION_SIZE = 7.5f;
