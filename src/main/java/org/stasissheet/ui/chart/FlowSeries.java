@@ -1,0 +1,18 @@
+package org.stasissheet.ui.chart;
+
+import java.util.List;
+import java.util.Objects;
+import org.stasissheet.flow.FlowPoint;
+
+/**
+ * One line of the flow chart.
+ *
+ * @param shownAtStart whether its toggle starts on (the patient's series) or off (what-ifs)
+ */
+public record FlowSeries(String id, String name, List<FlowPoint> points, boolean shownAtStart) {
+    public FlowSeries {
+        Objects.requireNonNull(id, "id");
+        Objects.requireNonNull(name, "name");
+        points = List.copyOf(points);
+    }
+}
