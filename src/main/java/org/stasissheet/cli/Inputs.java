@@ -1,8 +1,12 @@
 package org.stasissheet.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
+import org.stasissheet.files.CaseFiles;
 import org.stasissheet.intake.Case;
+import org.stasissheet.intake.CaseReader;
 import org.stasissheet.rules.RuleSet;
 
 /**
@@ -14,7 +18,14 @@ final class Inputs {
     }
 
     static Case readCase(Path file) {
-        throw new InvalidInputException("reading case files lands with the intake work: " + file);
+        CaseReader.Result result = CaseFiles.read(file);
+        if (result instanceof CaseReader.Accepted accepted) {
+            return accepted.c();
+        }
+        List<String> lines = new ArrayList<>();
+        lines.add(file + ": the case was not read; nothing was assessed.");
+        ((CaseReader.Rejected) result).problems().forEach(p -> lines.add("  " + p));
+        throw new InvalidInputException(lines);
     }
 
     static RuleSet ruleSet(Optional<Path> dir) {

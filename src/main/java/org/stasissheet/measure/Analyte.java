@@ -59,7 +59,9 @@ public enum Analyte {
             unit("mg/dL", "mg/dL", 0.01, "definition: 1 mg/dL = 0.01 g/L")),
     PAO2("pao2", "arterial O₂ tension", "mm[Hg]", 5, 700,
             unit("mm[Hg]", "mmHg", 1, "identity"),
-            unit("kPa", "kPa", 1000 / 133.322387415, "UCUM: 1 mm[Hg] = 133.322387415 Pa (from the definition of mm[Hg] via the density of mercury and g)")),
+            // UCUM defines m[Hg] as 133.3220 kPa, so 1 mm[Hg] = 133.322 Pa; the 133.322387415 Pa of the
+            // conventional (BIPM) millimetre of mercury differs by 3 ppm, which the UCUM check showed.
+            unit("kPa", "kPa", 1000 / 133.322, "UCUM 2.2: 1 m[Hg] = 133.3220 kPa, so 1 kPa = 1000/133.322 mm[Hg]")),
     SPO2("spo2", "pulse oximetry", "%", 30, 100,
             unit("%", "%", 1, "identity")),
     HEIGHT("height", "height", "cm", 30, 250,

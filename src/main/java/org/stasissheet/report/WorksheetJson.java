@@ -34,7 +34,8 @@ public final class WorksheetJson {
         root.set("ruleSet", ruleSet(sheet.ruleSet()));
         root.set("inputs", inputs(sheet));
         // verdicts, flags: rules work
-        // flow, apheresis: estimates work
+        root.set("apheresis", EstimatesJson.apheresis(sheet.apheresis()));
+        root.set("flow", EstimatesJson.flow(sheet.flow()));
         ArrayNode cautions = root.putArray("cautions");
         sheet.cautions().forEach(cautions::add);
         return root;

@@ -20,8 +20,9 @@ public final class WorksheetText {
         sb.append(NL);
         ruleSet(sb, sheet.ruleSet());
         // verdicts and flags grouped by level: rules work
-        // flow and apheresis: estimates work
         inputs(sb, sheet);
+        EstimatesText.apheresis(sb, sheet.apheresis());
+        EstimatesText.flow(sb, sheet.flow());
         return sb.toString();
     }
 

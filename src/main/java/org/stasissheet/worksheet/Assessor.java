@@ -2,6 +2,9 @@ package org.stasissheet.worksheet;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.apheresis.ApheresisPlanner;
+import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Measurement;
 import org.stasissheet.rules.RuleSet;
@@ -12,7 +15,9 @@ public final class Assessor {
     }
 
     public static Worksheet assess(Case c, RuleSet rules) {
-        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING);
+        ApheresisPlan apheresis = ApheresisPlanner.plan(c, rules);
+        return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING,
+                FlowEstimator.estimate(c, rules, apheresis), apheresis);
     }
 
     static List<InputLine> inputs(Case c) {

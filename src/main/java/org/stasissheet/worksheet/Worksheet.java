@@ -2,6 +2,8 @@ package org.stasissheet.worksheet;
 
 import java.util.List;
 import java.util.Objects;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.intake.Case;
 import org.stasissheet.rules.Provenance;
 
@@ -9,12 +11,15 @@ import org.stasissheet.rules.Provenance;
  * Everything one assessment concluded, ready for any renderer: immutable and complete. Renderers present it
  * and never recompute.
  */
-public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions) {
+public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions,
+                        FlowEstimates flow, ApheresisPlan apheresis) {
     public static final String FORMAT = "stasis-worksheet/1";
 
     public Worksheet {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(ruleSet, "ruleSet");
+        Objects.requireNonNull(flow, "flow");
+        Objects.requireNonNull(apheresis, "apheresis");
         inputs = List.copyOf(inputs);
         cautions = List.copyOf(cautions);
     }

@@ -35,6 +35,21 @@ class StasisCommandTest {
     }
 
     @Test
+    @DisplayName("an implausible case is invalid input: every problem listed with its path, exit 2")
+    void implausibleCase_listsEveryProblem(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws java.io.IOException {
+        java.nio.file.Path file = dir.resolve("bad.json");
+        java.nio.file.Files.writeString(file, "{\"format\":\"stasis-case/1\",\"labs\":{"
+                + "\"wbc\":{\"value\":150000,\"unit\":\"10*9/L\"},\"igmm\":{\"value\":1,\"unit\":\"g/L\"}}}");
+        assertEquals(ExitCode.INVALID_INPUT, run("assess", file.toString()));
+        String e = err.toString();
+        assertTrue(e.contains("labs.wbc: 150000 10*9/L is not plausible; did you mean /uL (= 150 10*9/L)?"), e);
+        assertTrue(e.contains("labs.igmm: unknown key"), e);
+        assertFalse(e.contains("\tat "), "no stack trace: " + e);
+        assertEquals("", out.toString(), "nothing printed as a worksheet");
+    }
+
+    @Test
     @DisplayName("help names the standing caution")
     void help_carriesTheCaution() {
         assertEquals(ExitCode.DONE, run("--help"));

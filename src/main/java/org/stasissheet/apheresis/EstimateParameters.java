@@ -1,0 +1,58 @@
+package org.stasissheet.apheresis;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * Every rule-set parameter the flow and apheresis estimates read, with the unit the code computes in. One place,
+ * so that the rule-set validator can check that a rule set carries them all (see {@link #REQUIRED_UNITS}).
+ * Values, sources and basis tags live in the rule files, never here.
+ */
+public final class EstimateParameters {
+    private EstimateParameters() {
+    }
+
+    /** Reference hematocrit of the flow comparison (CASE-FORMAT). */
+    public static final String REFERENCE_HEMATOCRIT = "flow.referenceHematocrit";
+    /** Reference serum viscosity, the middle of the normal range (Mehta &amp; Singhal 2003). */
+    public static final String REFERENCE_SERUM_VISCOSITY = "flow.referenceSerumViscosity";
+
+    public static final String VOLUME_MYELOBLAST = "leukocrit.volume.myeloblast";
+    public static final String VOLUME_LYMPHOBLAST = "leukocrit.volume.lymphoblast";
+    public static final String VOLUME_MATURE_LYMPHOCYTE = "leukocrit.volume.matureLymphocyte";
+
+    public static final String TRANSFUSION_UNIT_VOLUME = "transfusion.unitVolume";
+    public static final String TRANSFUSION_UNIT_RED_CELL_VOLUME = "transfusion.unitRedCellVolume";
+
+    public static final String INTRAVASCULAR_FRACTION_IGM = "exchange.intravascularFraction.IgM";
+    public static final String INTRAVASCULAR_FRACTION_IGG = "exchange.intravascularFraction.IgG";
+    public static final String INTRAVASCULAR_FRACTION_IGA = "exchange.intravascularFraction.IgA";
+
+    public static final String PROCESS_BLOOD_VOLUMES_LOW = "leukapheresis.processBloodVolumesLow";
+    public static final String PROCESS_BLOOD_VOLUMES_HIGH = "leukapheresis.processBloodVolumesHigh";
+    public static final String WBC_REDUCTION_LOW = "leukapheresis.reductionLow";
+    public static final String WBC_REDUCTION_HIGH = "leukapheresis.reductionHigh";
+
+    /** Every id above with its required UCUM unit, in a fixed order. */
+    public static final Map<String, String> REQUIRED_UNITS;
+
+    static {
+        Map<String, String> units = new LinkedHashMap<>();
+        units.put(REFERENCE_HEMATOCRIT, "1");
+        units.put(REFERENCE_SERUM_VISCOSITY, "cP");
+        units.put(VOLUME_MYELOBLAST, "fL");
+        units.put(VOLUME_LYMPHOBLAST, "fL");
+        units.put(VOLUME_MATURE_LYMPHOCYTE, "fL");
+        units.put(TRANSFUSION_UNIT_VOLUME, "L");
+        units.put(TRANSFUSION_UNIT_RED_CELL_VOLUME, "L");
+        units.put(INTRAVASCULAR_FRACTION_IGM, "1");
+        units.put(INTRAVASCULAR_FRACTION_IGG, "1");
+        units.put(INTRAVASCULAR_FRACTION_IGA, "1");
+        units.put(PROCESS_BLOOD_VOLUMES_LOW, "1");
+        units.put(PROCESS_BLOOD_VOLUMES_HIGH, "1");
+        units.put(WBC_REDUCTION_LOW, "1");
+        units.put(WBC_REDUCTION_HIGH, "1");
+        REQUIRED_UNITS = Collections.unmodifiableMap(units);
+    }
+}

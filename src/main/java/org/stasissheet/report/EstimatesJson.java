@@ -1,0 +1,135 @@
+package org.stasissheet.report;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.apheresis.ValueRange;
+import org.stasissheet.flow.FlowEstimates;
+import org.stasissheet.flow.FlowPoint;
+import org.stasissheet.flow.Leukocrit;
+import org.stasissheet.flow.WhatIf;
+import org.stasissheet.measure.Estimate;
+
+/**
+ * The {@code flow} and {@code apheresis} sections of the worksheet JSON. Null policy of these sections: a number
+ * or object that could not be estimated is {@code null}, a series that could not be made is {@code []}, and in
+ * both cases the enclosing object's {@code reasons} holds the sentence saying why, under the same key.
+ */
+final class EstimatesJson {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private EstimatesJson() {
+    }
+
+    static ObjectNode apheresis(ApheresisPlan plan) {
+        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode reasons = MAPPER.createObjectNode();
+        number(n, reasons, "bloodVolumeL", plan.bloodVolumeL());
+        number(n, reasons, "plasmaVolumeL", plan.plasmaVolumeL());
+        number(n, reasons, "plasmaVolumeFromBloodVolumeL", plan.plasmaVolumeFromBloodVolumeL());
+        number(n, reasons, "paraproteinGPerL", plan.paraproteinGPerL());
+        number(n, reasons, "intravascularFraction", plan.intravascularFraction());
+        ArrayNode rows = n.putArray("exchanges");
+        for (ExchangeRow row : plan.exchanges()) {
+            ObjectNode r = rows.addObject();
+            ObjectNode rowReasons = MAPPER.createObjectNode();
+            r.put("plasmaVolumes", row.plasmaVolumes());
+            number(r, rowReasons, "volumeL", row.volumeL());
+            r.put("intravascularRemaining", row.intravascularRemaining());
+            number(r, rowReasons, "paraproteinAfterGPerL", row.paraproteinAfterGPerL());
+            number(r, rowReasons, "serumViscosityAfter", row.serumViscosityAfter());
+            r.set("reasons", rowReasons);
+        }
+        ObjectNode leuka = n.putObject("leukapheresis");
+        ObjectNode leukaReasons = MAPPER.createObjectNode();
+        range(leuka, leukaReasons, "processVolumeL", plan.leukapheresis().processVolumeL());
+        range(leuka, leukaReasons, "wbcAfter", plan.leukapheresis().wbcAfter());
+        leuka.set("reasons", leukaReasons);
+        strings(n.putArray("notes"), plan.notes());
+        n.set("reasons", reasons);
+        return n;
+    }
+
+    static ObjectNode flow(FlowEstimates f) {
+        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode reasons = MAPPER.createObjectNode();
+        n.put("referenceHematocrit", f.referenceHematocrit());
+        n.put("referenceSerumViscosity", f.referenceSerumViscosity());
+        number(n, reasons, "hematocrit", f.hematocrit());
+        n.put("plasmaRatio", f.plasmaRatio());
+        n.put("plasmaRatioBasis", f.plasmaRatioBasis());
+        series(n, reasons, "byDiameter", f.byDiameter());
+        series(n, reasons, "inVivo", f.inVivo());
+        if (f.leukocrit() instanceof Estimate.Known<Leukocrit> known) {
+            Leukocrit l = known.value();
+            ObjectNode lk = n.putObject("leukocrit");
+            lk.put("cellType", l.cellType());
+            lk.put("meanCellVolumeFl", l.meanCellVolumeFl());
+            lk.put("wbc", l.wbc());
+            lk.put("leukocrit", l.leukocrit());
+            lk.put("combinedFraction", l.combinedFraction());
+            points(lk.putArray("byDiameter"), l.byDiameter());
+        } else {
+            n.putNull("leukocrit");
+            reasons.put("leukocrit", f.leukocrit().whyUnknown().orElseThrow());
+        }
+        ArrayNode whatIfs = n.putArray("whatIf");
+        for (WhatIf w : f.whatIf()) {
+            ObjectNode x = whatIfs.addObject();
+            ObjectNode whatReasons = MAPPER.createObjectNode();
+            x.put("id", w.id());
+            x.put("name", w.name());
+            strings(x.putArray("assumptions"), w.assumptions());
+            series(x, whatReasons, "byDiameter", w.byDiameter());
+            series(x, whatReasons, "leukocrit", w.leukocrit());
+            x.set("reasons", whatReasons);
+        }
+        strings(n.putArray("caveats"), f.caveats());
+        n.set("reasons", reasons);
+        return n;
+    }
+
+    private static void number(ObjectNode n, ObjectNode reasons, String key, Estimate<Double> e) {
+        if (e instanceof Estimate.Known<Double> known) {
+            n.put(key, known.value());
+        } else {
+            n.putNull(key);
+            reasons.put(key, e.whyUnknown().orElseThrow());
+        }
+    }
+
+    private static void range(ObjectNode n, ObjectNode reasons, String key, Estimate<ValueRange> e) {
+        if (e instanceof Estimate.Known<ValueRange> known) {
+            ObjectNode r = n.putObject(key);
+            r.put("low", known.value().low());
+            r.put("high", known.value().high());
+        } else {
+            n.putNull(key);
+            reasons.put(key, e.whyUnknown().orElseThrow());
+        }
+    }
+
+    private static void series(ObjectNode n, ObjectNode reasons, String key, Estimate<List<FlowPoint>> e) {
+        ArrayNode list = n.putArray(key);
+        if (e instanceof Estimate.Known<List<FlowPoint>> known) {
+            points(list, known.value());
+        } else {
+            reasons.put(key, e.whyUnknown().orElseThrow());
+        }
+    }
+
+    private static void points(ArrayNode list, List<FlowPoint> points) {
+        for (FlowPoint p : points) {
+            ObjectNode o = list.addObject();
+            o.put("diameterUm", p.diameterUm());
+            o.put("relativeFlow", p.relativeFlow());
+        }
+    }
+
+    private static void strings(ArrayNode list, List<String> values) {
+        values.forEach(list::add);
+    }
+}
