@@ -1,8 +1,10 @@
 package org.stasissheet.apheresis;
 
-import static org.stasissheet.apheresis.EstimateParameters.INTRAVASCULAR_FRACTION_IGA;
-import static org.stasissheet.apheresis.EstimateParameters.INTRAVASCULAR_FRACTION_IGG;
-import static org.stasissheet.apheresis.EstimateParameters.INTRAVASCULAR_FRACTION_IGM;
+import org.stasissheet.rules.EstimateParameters;
+
+import static org.stasissheet.rules.EstimateParameters.INTRAVASCULAR_FRACTION_IGA;
+import static org.stasissheet.rules.EstimateParameters.INTRAVASCULAR_FRACTION_IGG;
+import static org.stasissheet.rules.EstimateParameters.INTRAVASCULAR_FRACTION_IGM;
 
 import java.util.ArrayList;
 import java.util.List;

@@ -5,8 +5,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.stasissheet.files.CaseFiles;
+import org.stasissheet.files.RuleSources;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.CaseReader;
+import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.RuleSet;
 
 /**
@@ -28,7 +30,16 @@ final class Inputs {
         throw new InvalidInputException(lines);
     }
 
+    /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
     static RuleSet ruleSet(Optional<Path> dir) {
-        throw new InvalidInputException("loading rule sets lands with the rules work");
+        LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);
+        if (result instanceof LoadResult.Refused refused) {
+            List<String> lines = new ArrayList<>();
+            lines.add("The rule set " + dir.map(Path::toString).orElse("(shipped)")
+                    + " was refused; nothing of it was used:");
+            refused.problems().forEach(p -> lines.add("  " + p));
+            throw new InvalidInputException(lines);
+        }
+        return ((LoadResult.Loaded) result).ruleSet();
     }
 }

@@ -1,12 +1,12 @@
 package org.stasissheet.flow;
 
-import static org.stasissheet.apheresis.EstimateParameters.REFERENCE_HEMATOCRIT;
-import static org.stasissheet.apheresis.EstimateParameters.REFERENCE_SERUM_VISCOSITY;
-import static org.stasissheet.apheresis.EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME;
-import static org.stasissheet.apheresis.EstimateParameters.TRANSFUSION_UNIT_VOLUME;
-import static org.stasissheet.apheresis.EstimateParameters.VOLUME_LYMPHOBLAST;
-import static org.stasissheet.apheresis.EstimateParameters.VOLUME_MATURE_LYMPHOCYTE;
-import static org.stasissheet.apheresis.EstimateParameters.VOLUME_MYELOBLAST;
+import static org.stasissheet.rules.EstimateParameters.REFERENCE_HEMATOCRIT;
+import static org.stasissheet.rules.EstimateParameters.REFERENCE_SERUM_VISCOSITY;
+import static org.stasissheet.rules.EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME;
+import static org.stasissheet.rules.EstimateParameters.TRANSFUSION_UNIT_VOLUME;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MATURE_LYMPHOCYTE;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MYELOBLAST;
 
 import java.util.ArrayList;
 import java.util.List;

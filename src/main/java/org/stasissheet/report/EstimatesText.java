@@ -34,7 +34,7 @@ final class EstimatesText {
                     .append(Numbers.rounded(100 * row.intravascularRemaining(), 3)).append(" %").append(NL)
                     .append("      paraprotein after: ").append(value(row.paraproteinAfterGPerL(), " g/L")).append(NL)
                     .append("      serum viscosity after (projection): ")
-                    .append(value(row.serumViscosityAfter(), "")).append(NL);
+                    .append(value(row.serumViscosityAfter(), " (on the scale the laboratory reported)")).append(NL);
         }
         line(sb, "Leukapheresis, blood to process", range(plan.leukapheresis().processVolumeL(), " L"));
         line(sb, "Leukapheresis, WBC after one", range(plan.leukapheresis().wbcAfter(), " x10^9/L"));

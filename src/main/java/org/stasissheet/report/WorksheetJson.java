@@ -5,7 +5,13 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import java.util.Optional;
 import org.stasissheet.measure.Quantity;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
+import org.stasissheet.rules.LeukostasisVerdict;
+import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.worksheet.InputLine;
 import org.stasissheet.worksheet.Worksheet;
@@ -33,7 +39,10 @@ public final class WorksheetJson {
         root.put("format", Worksheet.FORMAT);
         root.set("ruleSet", ruleSet(sheet.ruleSet()));
         root.set("inputs", inputs(sheet));
-        // verdicts, flags: rules work
+        root.set("hyperviscosity", hyperviscosity(sheet.hyperviscosity()));
+        root.set("leukostasis", leukostasis(sheet.leukostasis()));
+        root.set("tumorLysis", tumorLysis(sheet.tumorLysis()));
+        root.set("flags", flags(sheet.flags()));
         root.set("apheresis", EstimatesJson.apheresis(sheet.apheresis()));
         root.set("flow", EstimatesJson.flow(sheet.flow()));
         ArrayNode cautions = root.putArray("cautions");
@@ -48,6 +57,77 @@ public final class WorksheetJson {
         n.put("sha256", p.sha256());
         n.put("local", p.local());
         return n;
+    }
+
+    static ObjectNode hyperviscosity(HyperviscosityVerdict v) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("assessment", v.assessment().code());
+        n.put("route", v.route().code());
+        n.put("signs", v.signs());
+        ArrayNode unassessed = n.putArray("signsNotAssessed");
+        v.unassessed().forEach(unassessed::add);
+        n.put("reason", v.reason());
+        return n;
+    }
+
+    static ObjectNode leukostasis(LeukostasisVerdict v) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("assessed", v.assessed());
+        if (v.score().isPresent()) {
+            n.put("score", v.score().get());
+        } else {
+            n.putNull("score");
+        }
+        n.put("probability", v.probability().code());
+        n.put("reason", v.reason());
+        n.put("descriptorsBasis", LeukostasisVerdict.DESCRIPTOR_BASIS.code());
+        return n;
+    }
+
+    static ObjectNode tumorLysis(TumorLysisVerdict v) {
+        ObjectNode n = MAPPER.createObjectNode();
+        optionalBoolean(n, "laboratory", v.laboratory());
+        optionalBoolean(n, "clinical", v.clinical());
+        ArrayNode criteria = n.putArray("criteria");
+        for (TumorLysisVerdict.Criterion c : v.criteria()) {
+            ObjectNode k = criteria.addObject();
+            k.put("analyte", c.analyte().key());
+            if (c.value().isPresent()) {
+                k.set("value", quantity(c.value().get()));
+            } else {
+                k.putNull("value");
+            }
+            k.put("met", c.met());
+            k.put("how", c.how());
+        }
+        n.put("windowConfirmed", v.windowConfirmed());
+        n.put("window", v.window());
+        n.put("reason", v.reason());
+        return n;
+    }
+
+    static ArrayNode flags(List<Flag> flags) {
+        ArrayNode list = MAPPER.createArrayNode();
+        for (Flag f : flags) {
+            ObjectNode n = list.addObject();
+            n.put("id", f.id());
+            n.put("level", f.level().code());
+            n.put("levelWord", f.level().word());
+            n.put("symbol", f.level().symbol());
+            n.put("title", f.title());
+            n.put("explanation", f.explanation());
+            n.put("source", f.source());
+            n.put("basis", f.basis().code());
+        }
+        return list;
+    }
+
+    private static void optionalBoolean(ObjectNode n, String key, Optional<Boolean> value) {
+        if (value.isPresent()) {
+            n.put(key, value.get());
+        } else {
+            n.putNull(key);
+        }
     }
 
     static ArrayNode inputs(Worksheet sheet) {

@@ -1,6 +1,13 @@
 package org.stasissheet.report;
 
+import java.util.List;
+import java.util.Optional;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
+import org.stasissheet.rules.LeukostasisVerdict;
+import org.stasissheet.rules.Level;
+import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.worksheet.InputLine;
@@ -19,7 +26,8 @@ public final class WorksheetText {
         sheet.cautions().forEach(c -> sb.append("  * ").append(c).append(NL));
         sb.append(NL);
         ruleSet(sb, sheet.ruleSet());
-        // verdicts and flags grouped by level: rules work
+        verdicts(sb, sheet);
+        flags(sb, sheet);
         inputs(sb, sheet);
         EstimatesText.apheresis(sb, sheet.apheresis());
         EstimatesText.flow(sb, sheet.flow());
@@ -33,6 +41,53 @@ public final class WorksheetText {
             sb.append("  LOCAL PROTOCOL: this rule set differs from the shipped one.").append(NL);
         }
         sb.append(NL);
+    }
+
+    static void verdicts(StringBuilder sb, Worksheet sheet) {
+        sb.append("VERDICTS").append(NL);
+        HyperviscosityVerdict hv = sheet.hyperviscosity();
+        sb.append("  Hyperviscosity: ").append(hv.assessment().code()).append(NL);
+        sb.append("    ").append(hv.reason()).append(NL);
+        LeukostasisVerdict lk = sheet.leukostasis();
+        sb.append("  Leukostasis: ").append(lk.probability().code())
+                .append(lk.score().map(s -> " (score " + s + " of 3)").orElse("")).append(NL);
+        sb.append("    ").append(lk.reason()).append(NL);
+        TumorLysisVerdict tl = sheet.tumorLysis();
+        sb.append("  Tumor lysis (Cairo-Bishop): laboratory ").append(yesNo(tl.laboratory()))
+                .append(", clinical ").append(yesNo(tl.clinical())).append(NL);
+        sb.append("    ").append(tl.reason()).append(NL);
+        for (TumorLysisVerdict.Criterion c : tl.criteria()) {
+            sb.append("    - ").append(pad(c.analyte().label(), 11)).append(c.met() ? "met      " : "not met  ")
+                    .append(c.value().map(WorksheetText::format).orElse("-")).append("  ").append(c.how()).append(NL);
+        }
+        sb.append("    ").append(tl.window()).append(NL);
+        sb.append(NL);
+    }
+
+    /** Flags grouped by level, most urgent first; each group and line carries the level's word and symbol. */
+    static void flags(StringBuilder sb, Worksheet sheet) {
+        sb.append("FLAGS").append(NL);
+        if (sheet.flags().isEmpty()) {
+            sb.append("  (no rule fired; this does not rule anything out)").append(NL);
+        }
+        for (Level level : Level.values()) {
+            List<Flag> group = sheet.flags().stream().filter(f -> f.level() == level).toList();
+            if (group.isEmpty()) {
+                continue;
+            }
+            sb.append("  ").append(level.badge()).append(NL);
+            for (Flag f : group) {
+                sb.append("    [").append(level.symbol()).append("] ").append(f.title()).append(NL);
+                sb.append("        ").append(f.explanation()).append(NL);
+                sb.append("        source: ").append(f.source()).append(" (").append(f.basis().code()).append(")")
+                        .append("  id: ").append(f.id()).append(NL);
+            }
+        }
+        sb.append(NL);
+    }
+
+    private static String yesNo(Optional<Boolean> b) {
+        return b.map(v -> v ? "yes" : "no").orElse("undecided (too few values)");
     }
 
     static void inputs(StringBuilder sb, Worksheet sheet) {

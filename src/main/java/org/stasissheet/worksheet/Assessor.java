@@ -8,6 +8,7 @@ import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Measurement;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.rules.Verdicts;
 
 /** The one entry point of the core: a case and a rule set in, a worksheet out. Pure and deterministic. */
 public final class Assessor {
@@ -16,8 +17,10 @@ public final class Assessor {
 
     public static Worksheet assess(Case c, RuleSet rules) {
         ApheresisPlan apheresis = ApheresisPlanner.plan(c, rules);
+        Verdicts.Outcome outcome = Verdicts.assess(c, rules);
         return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING,
-                FlowEstimator.estimate(c, rules, apheresis), apheresis);
+                FlowEstimator.estimate(c, rules, apheresis), apheresis, outcome.hyperviscosity(),
+                outcome.leukostasis(), outcome.tumorLysis(), outcome.flags());
     }
 
     static List<InputLine> inputs(Case c) {

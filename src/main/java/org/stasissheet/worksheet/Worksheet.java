@@ -5,14 +5,22 @@ import java.util.Objects;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.intake.Case;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
+import org.stasissheet.rules.LeukostasisVerdict;
 import org.stasissheet.rules.Provenance;
+import org.stasissheet.rules.TumorLysisVerdict;
 
 /**
  * Everything one assessment concluded, ready for any renderer: immutable and complete. Renderers present it
  * and never recompute.
+ *
+ * @param flags every rule that fired, most urgent level first, then by id
  */
 public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions,
-                        FlowEstimates flow, ApheresisPlan apheresis) {
+                        FlowEstimates flow, ApheresisPlan apheresis,
+                        HyperviscosityVerdict hyperviscosity, LeukostasisVerdict leukostasis,
+                        TumorLysisVerdict tumorLysis, List<Flag> flags) {
     public static final String FORMAT = "stasis-worksheet/1";
 
     public Worksheet {
@@ -22,5 +30,9 @@ public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs,
         Objects.requireNonNull(apheresis, "apheresis");
         inputs = List.copyOf(inputs);
         cautions = List.copyOf(cautions);
+        Objects.requireNonNull(hyperviscosity, "hyperviscosity");
+        Objects.requireNonNull(leukostasis, "leukostasis");
+        Objects.requireNonNull(tumorLysis, "tumorLysis");
+        flags = List.copyOf(flags);
     }
 }

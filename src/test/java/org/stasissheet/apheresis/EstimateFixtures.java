@@ -1,8 +1,11 @@
 package org.stasissheet.apheresis;
 
+import org.stasissheet.rules.EstimateParameters;
+
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
+import org.stasissheet.files.RuleSources;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Condition;
 import org.stasissheet.intake.Cryoglobulin;
@@ -17,6 +20,7 @@ import org.stasissheet.intake.Sex;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.Basis;
+import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.Parameter;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.rules.RuleSet;
@@ -54,7 +58,12 @@ public final class EstimateFixtures {
         put(p, EstimateParameters.PROCESS_BLOOD_VOLUMES_HIGH, 2.0, "1", "common practice", Basis.COMMON_PRACTICE);
         put(p, EstimateParameters.WBC_REDUCTION_LOW, 0.2, "1", "common practice", Basis.COMMON_PRACTICE);
         put(p, EstimateParameters.WBC_REDUCTION_HIGH, 0.5, "1", "common practice", Basis.COMMON_PRACTICE);
-        return new RuleSet(new Provenance("estimates-test", "0", "0".repeat(64), false), "test parameters", p);
+        // the verdict code needs the rules' own parameters and rules too: take them from the shipped set, keeping
+        // the estimate values above (merge of the rules work)
+        RuleSet shipped = ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
+        shipped.parameters().forEach(p::putIfAbsent);
+        return new RuleSet(new Provenance("estimates-test", "0", "0".repeat(64), false), "test parameters", p,
+                shipped.rules());
     }
 
     private static void put(Map<String, Parameter> p, String id, double value, String unit, String source,

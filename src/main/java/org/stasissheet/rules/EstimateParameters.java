@@ -1,12 +1,9 @@
-package org.stasissheet.apheresis;
+package org.stasissheet.rules;
 
-import java.util.Collections;
-import java.util.LinkedHashMap;
-import java.util.Map;
 
 /**
  * Every rule-set parameter the flow and apheresis estimates read, with the unit the code computes in. One place,
- * so that the rule-set validator can check that a rule set carries them all (see {@link #REQUIRED_UNITS}).
+ * so that the rule-set validator can check that a rule set carries them all (see {@link RequiredParameters}).
  * Values, sources and basis tags live in the rule files, never here.
  */
 public final class EstimateParameters {
@@ -33,26 +30,4 @@ public final class EstimateParameters {
     public static final String PROCESS_BLOOD_VOLUMES_HIGH = "leukapheresis.processBloodVolumesHigh";
     public static final String WBC_REDUCTION_LOW = "leukapheresis.reductionLow";
     public static final String WBC_REDUCTION_HIGH = "leukapheresis.reductionHigh";
-
-    /** Every id above with its required UCUM unit, in a fixed order. */
-    public static final Map<String, String> REQUIRED_UNITS;
-
-    static {
-        Map<String, String> units = new LinkedHashMap<>();
-        units.put(REFERENCE_HEMATOCRIT, "1");
-        units.put(REFERENCE_SERUM_VISCOSITY, "cP");
-        units.put(VOLUME_MYELOBLAST, "fL");
-        units.put(VOLUME_LYMPHOBLAST, "fL");
-        units.put(VOLUME_MATURE_LYMPHOCYTE, "fL");
-        units.put(TRANSFUSION_UNIT_VOLUME, "L");
-        units.put(TRANSFUSION_UNIT_RED_CELL_VOLUME, "L");
-        units.put(INTRAVASCULAR_FRACTION_IGM, "1");
-        units.put(INTRAVASCULAR_FRACTION_IGG, "1");
-        units.put(INTRAVASCULAR_FRACTION_IGA, "1");
-        units.put(PROCESS_BLOOD_VOLUMES_LOW, "1");
-        units.put(PROCESS_BLOOD_VOLUMES_HIGH, "1");
-        units.put(WBC_REDUCTION_LOW, "1");
-        units.put(WBC_REDUCTION_HIGH, "1");
-        REQUIRED_UNITS = Collections.unmodifiableMap(units);
-    }
 }

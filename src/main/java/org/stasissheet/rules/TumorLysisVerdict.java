@@ -1,0 +1,45 @@
+package org.stasissheet.rules;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import org.stasissheet.measure.Analyte;
+import org.stasissheet.measure.Quantity;
+
+/**
+ * Cairo–Bishop tumor lysis (Cairo MS, Bishop M, Br J Haematol 2004), as decided by {@link Verdicts#tumorLysis}.
+ *
+ * @param laboratory empty when fewer than two of the four criteria could be evaluated
+ * @param clinical   empty exactly when {@code laboratory} is empty; false when laboratory is false
+ * @param window     whether the assessment falls in the published window around the start of therapy, in words
+ */
+public record TumorLysisVerdict(Optional<Boolean> laboratory, Optional<Boolean> clinical, List<Criterion> criteria,
+                                boolean windowConfirmed, String window, String reason) {
+    public TumorLysisVerdict {
+        Objects.requireNonNull(laboratory, "laboratory");
+        Objects.requireNonNull(clinical, "clinical");
+        criteria = List.copyOf(criteria);
+        Objects.requireNonNull(window, "window");
+        Objects.requireNonNull(reason, "reason");
+        if (laboratory.isPresent() != clinical.isPresent()) {
+            throw new IllegalArgumentException("clinical is decided exactly when laboratory is");
+        }
+    }
+
+    /**
+     * One laboratory criterion.
+     *
+     * @param value empty when the case has no value for the analyte
+     * @param how   how it was met, or why not ("≥ 476 umol/L", "+25 % from baseline 300 umol/L", "not measured")
+     */
+    public record Criterion(Analyte analyte, Optional<Quantity> value, boolean met, String how) {
+        public Criterion {
+            Objects.requireNonNull(analyte, "analyte");
+            Objects.requireNonNull(value, "value");
+            Objects.requireNonNull(how, "how");
+            if (met && value.isEmpty()) {
+                throw new IllegalArgumentException("a criterion without a value cannot be met");
+            }
+        }
+    }
+}

@@ -1,0 +1,218 @@
+package org.stasissheet.rules;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.util.List;
+import java.util.Set;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.stasissheet.intake.Cryoglobulin;
+import org.stasissheet.intake.Leukemia;
+import org.stasissheet.intake.Observation;
+import org.stasissheet.intake.Paraprotein;
+import org.stasissheet.intake.Retinopathy;
+import org.stasissheet.measure.Analyte;
+
+/** One test (fires / does not fire) for each shipped rule; the source of each is named beside it. */
+class FlagRulesTest {
+    private static TestCases symptomaticIgm() {
+        return TestCases.a().findings(TestCases.noSigns())
+                .signs(Observation.YES, Observation.NO, Retinopathy.NONE, Observation.NO)
+                .paraprotein(Paraprotein.IGM).lab(Analyte.SERUM_VISCOSITY, 5.6, "cP");
+    }
+
+    private static TestCases aml(double wbc) {
+        return TestCases.a().findings(TestCases.noSigns()).leukemia(Leukemia.AML, false).lab(Analyte.WBC, wbc, "10*9/L");
+    }
+
+    @Test
+    @DisplayName("every shipped rule is covered by a test in this class")
+    void everyRuleCovered() throws Exception {
+        String source = new String(getClass().getResourceAsStream("FlagRulesTest.class").readAllBytes(),
+                java.nio.charset.StandardCharsets.ISO_8859_1);
+        List<String> missing = TestCases.SHIPPED.rules().stream().map(Rule::id).filter(id -> !source.contains(id))
+                .toList();
+        assertEquals(List.of(), missing, "rules without a test");
+    }
+
+    @Test
+    @DisplayName("flags are sorted by level, then id")
+    void sorted() {
+        List<Flag> flags = symptomaticIgm().plan(false, true).assess().flags();
+        for (int i = 1; i < flags.size(); i++) {
+            Flag a = flags.get(i - 1);
+            Flag b = flags.get(i);
+            assertTrue(a.level().compareTo(b.level()) < 0
+                    || a.level() == b.level() && a.id().compareTo(b.id()) < 0, a.id() + " before " + b.id());
+        }
+    }
+
+    @Test
+    @DisplayName("hyperviscosity.likely (Gertz 2018); no-diuretics, transfusion-caution (common practice)")
+    void hyperviscosityCautions() {
+        Set<String> on = ids(symptomaticIgm());
+        assertTrue(on.containsAll(Set.of("hyperviscosity.likely", "hyperviscosity.no-diuretics",
+                "hyperviscosity.transfusion-caution", "apheresis.hyperviscosity-symptomatic")), on.toString());
+        assertFalse(on.contains("hyperviscosity.transfusion-planned"));
+        Set<String> off = ids(TestCases.a().findings(TestCases.noSigns()).lab(Analyte.SERUM_VISCOSITY, 1.6, "cP"));
+        assertFalse(off.contains("hyperviscosity.no-diuretics"));
+        assertFalse(off.contains("hyperviscosity.likely"));
+    }
+
+    @Test
+    @DisplayName("hyperviscosity.transfusion-planned is act-now (common practice)")
+    void transfusionPlannedInHyperviscosity() {
+        assertTrue(symptomaticIgm().plan(false, true).fires("hyperviscosity.transfusion-planned"));
+    }
+
+    @Test
+    @DisplayName("hyperviscosity.measure-viscosity-now / measure-both-now (Gertz 2018)")
+    void measureNow() {
+        TestCases noSv = TestCases.a().findings(TestCases.noSigns()).paraprotein(Paraprotein.IGM)
+                .lab(Analyte.IGM, 3.5, "g/dL");
+        assertTrue(noSv.fires("hyperviscosity.measure-viscosity-now"));
+        assertFalse(symptomaticIgm().fires("hyperviscosity.measure-viscosity-now"));
+        assertFalse(symptomaticIgm().fires("hyperviscosity.measure-both-now"));
+    }
+
+    @Test
+    @DisplayName("hyperviscosity.fundoscopy (Menke 2006) and signs-unassessed only with a paraprotein")
+    void fundoscopy() {
+        assertTrue(TestCases.a().paraprotein(Paraprotein.IGA).fires("hyperviscosity.fundoscopy"));
+        assertFalse(TestCases.a().fires("hyperviscosity.fundoscopy"));
+        assertFalse(symptomaticIgm().fires("hyperviscosity.fundoscopy"));
+        assertFalse(symptomaticIgm().fires("hyperviscosity.signs-unassessed"));
+    }
+
+    @ParameterizedTest(name = "IgM {0} {1}, rituximab {2} -> {3}")
+    @CsvSource({
+        // IWWM-8 (Leblond 2016): "> 4000 mg/dL", so 40 g/L itself does not trigger
+        "40,    g/L,   true,  false",
+        "40.1,  g/L,   true,  true",
+        "4001,  mg/dL, true,  true",
+        "4000,  mg/dL, true,  false",
+        "60,    g/L,   false, false"})
+    void igmFlare(double igm, String unit, boolean rituximab, boolean expected) {
+        TestCases t = TestCases.a().paraprotein(Paraprotein.IGM).lab(Analyte.IGM, igm, unit).plan(rituximab, false);
+        assertEquals(expected, t.fires("hyperviscosity.igm-flare"));
+        assertEquals(expected, t.fires("apheresis.rituximab-prophylaxis"));
+    }
+
+    @Test
+    @DisplayName("hyperviscosity.cryoglobulin-warm (common practice)")
+    void cryoglobulin() {
+        assertTrue(TestCases.a().cryoglobulin(Cryoglobulin.PRESENT).fires("hyperviscosity.cryoglobulin-warm"));
+        assertFalse(TestCases.a().cryoglobulin(Cryoglobulin.UNKNOWN).fires("hyperviscosity.cryoglobulin-warm"));
+    }
+
+    @Test
+    @DisplayName("leukostasis.apl-no-leukapheresis (Blum & Porcu 2007) and leukostasis.dic-screen (common practice)")
+    void apl() {
+        TestCases apl = TestCases.a().leukemia(Leukemia.APL, false).lab(Analyte.WBC, 20, "10*9/L");
+        assertTrue(apl.fires("leukostasis.apl-no-leukapheresis"));
+        assertTrue(apl.fires("leukostasis.dic-screen"));
+        assertTrue(aml(150).fires("leukostasis.dic-screen"));
+        assertFalse(aml(80).fires("leukostasis.dic-screen"));
+        assertFalse(aml(150).fires("leukostasis.apl-no-leukapheresis"));
+    }
+
+    @Test
+    @DisplayName("leukostasis.transfusion-caution / transfusion-planned (Harris, BMJ 1978)")
+    void transfusionInHyperleukocytosis() {
+        assertTrue(aml(150).fires("leukostasis.transfusion-caution"));
+        assertFalse(aml(150).fires("leukostasis.transfusion-planned"));
+        assertTrue(aml(150).plan(false, true).fires("leukostasis.transfusion-planned"));
+        assertFalse(aml(90).plan(false, true).fires("leukostasis.transfusion-planned"));
+    }
+
+    @Test
+    @DisplayName("leukostasis.probable (common practice) at probable and highly probable only")
+    void leukostasisProbable() {
+        assertTrue(aml(150).grades(2, 0, 0).fires("leukostasis.probable"));
+        assertTrue(aml(150).grades(0, 3, 0).fires("leukostasis.probable"));
+        assertFalse(aml(150).grades(1, 0, 0).fires("leukostasis.probable"));
+    }
+
+    @Test
+    @DisplayName("apheresis.leukostasis / hyperleukocytosis-prophylaxis (ASFA 2023, from memory), never in APL")
+    void leukapheresisIndications() {
+        assertTrue(aml(150).grades(1, 0, 0).fires("apheresis.leukostasis"));
+        assertFalse(aml(150).grades(1, 0, 0).fires("apheresis.hyperleukocytosis-prophylaxis"));
+        assertTrue(aml(150).fires("apheresis.hyperleukocytosis-prophylaxis"));
+        TestCases apl = TestCases.a().findings(TestCases.noSigns()).grades(2, 0, 0).leukemia(Leukemia.APL, false)
+                .lab(Analyte.WBC, 150, "10*9/L");
+        assertFalse(apl.fires("apheresis.leukostasis"));
+        assertFalse(apl.fires("apheresis.hyperleukocytosis-prophylaxis"));
+    }
+
+    @Test
+    @DisplayName("tumorLysis.screen (common practice) when hyperleukocytosis and too few values")
+    void tumorLysisScreen() {
+        assertTrue(aml(150).fires("tumorLysis.screen"));
+        assertFalse(aml(150).lab(Analyte.POTASSIUM, 4, "mmol/L").lab(Analyte.CALCIUM, 2.3, "mmol/L")
+                .fires("tumorLysis.screen"));
+    }
+
+    @ParameterizedTest(name = "WBC {0}, PaO2 {1} {2}, SpO2 {3} -> {4}")
+    @CsvSource({
+        // Van de Louw 2016: WBC > 100, PaO2 < 55 mmHg, SpO2 > 94 %
+        "150,    50,  mm[Hg], 97, true",
+        "100,    50,  mm[Hg], 97, false",
+        "100.01, 50,  mm[Hg], 97, true",
+        "150,    55,  mm[Hg], 97, false",
+        "150,    54.9, mm[Hg], 97, true",
+        "150,    50,  mm[Hg], 94, false",
+        "150,    6.5, kPa,    97, true",
+        "150,    7.4, kPa,    97, false"})
+    void spuriousHypoxaemia(double wbc, double pao2, String unit, double spo2, boolean expected) {
+        TestCases t = TestCases.a().lab(Analyte.WBC, wbc, "10*9/L").lab(Analyte.PAO2, pao2, unit)
+                .lab(Analyte.SPO2, spo2, "%");
+        assertEquals(expected, t.fires("artefact.spurious-hypoxaemia"));
+    }
+
+    @ParameterizedTest(name = "WBC {0}, K {1} -> {2}")
+    @CsvSource({
+        // Rifkin 2011; very high count > 100 (common practice), potassium >= 6.0 (Cairo–Bishop limit reused)
+        "300, 6.0,  true",
+        "300, 5.99, false",
+        "100, 6.5,  false",
+        "101, 6.5,  true"})
+    void pseudohyperkalaemia(double wbc, double k, boolean expected) {
+        TestCases t = TestCases.a().leukemia(Leukemia.CLL, false).lab(Analyte.WBC, wbc, "10*9/L")
+                .lab(Analyte.POTASSIUM, k, "mmol/L");
+        assertEquals(expected, t.fires("artefact.pseudohyperkalaemia"));
+    }
+
+    @ParameterizedTest(name = "total protein {0} {1} -> {2}")
+    @CsvSource({"100, g/L, true", "99.9, g/L, false", "10, g/dL, true", "12, g/dL, true"})
+    void pseudohyponatraemia(double tp, String unit, boolean expected) {
+        // limit 100 g/L from memory, included
+        assertEquals(expected, TestCases.a().lab(Analyte.TOTAL_PROTEIN, tp, unit).fires("artefact.pseudohyponatraemia"));
+    }
+
+    @Test
+    @DisplayName("hyperleukocytosis.* by type are tested with their limits in LeukostasisVerdictTest")
+    void hyperleukocytosisRulesExist() {
+        Set<String> ids = TestCases.SHIPPED.rules().stream().map(Rule::id).collect(Collectors.toSet());
+        assertTrue(ids.containsAll(Set.of("hyperleukocytosis.AML", "hyperleukocytosis.AMLMonocytic",
+                "hyperleukocytosis.APL", "hyperleukocytosis.ALL", "hyperleukocytosis.CML", "hyperleukocytosis.CLL")));
+        assertTrue(ids.containsAll(Set.of("tumorLysis.clinical", "tumorLysis.laboratory",
+                "tumorLysis.window-not-confirmed")), "tested in TumorLysisVerdictTest");
+    }
+
+    @Test
+    @DisplayName("every flag carries a source and a basis")
+    void everyFlagSourced() {
+        symptomaticIgm().plan(true, true).assess().flags().forEach(f -> {
+            assertFalse(f.source().isBlank(), f.id());
+            assertNotNull(f.basis());
+        });
+    }
+
+    private static Set<String> ids(TestCases t) {
+        return t.assess().flags().stream().map(Flag::id).collect(Collectors.toSet());
+    }
+}
