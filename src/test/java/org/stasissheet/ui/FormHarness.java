@@ -8,7 +8,6 @@ import java.time.ZoneOffset;
 import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
 import javafx.stage.Stage;
-import org.stasissheet.apheresis.EstimateFixtures;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.MainWindow;
 import org.testfx.util.WaitForAsyncUtils;
@@ -23,7 +22,7 @@ public final class FormHarness {
 
     public static FormSettings settings(Path dataFolder, ScriptedShell shell) {
         return new FormSettings(dataFolder, stage -> shell, CLOCK, Duration.ofMillis(150), Duration.ofMillis(30),
-                folder -> EstimateFixtures.rules(), FormSettings.DEFAULT_SAMPLE);
+                org.stasissheet.ui.app.RuleLoading::load, FormSettings.DEFAULT_SAMPLE);
     }
 
     /** Opens a window on a fresh stage, on the JavaFX thread, and waits until it is up. */

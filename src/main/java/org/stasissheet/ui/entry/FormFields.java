@@ -12,6 +12,7 @@ import org.stasissheet.intake.Retinopathy;
 import org.stasissheet.intake.Sex;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.UnitOption;
+import org.stasissheet.rules.LeukostasisVerdict;
 
 /**
  * Every field of the form, in screen and tab order: the one list that the entry view, the draft JSON and the
@@ -87,9 +88,9 @@ public final class FormFields {
         }
 
         Section f = Section.FINDINGS;
-        list.add(grade("findings.pulmonaryGrade", "Pulmonary grade", Organ.PULMONARY));
-        list.add(grade("findings.neurologicalGrade", "Neurological grade", Organ.NEUROLOGICAL));
-        list.add(grade("findings.otherOrganGrade", "Other organs grade", Organ.OTHER));
+        list.add(grade("findings.pulmonaryGrade", "Pulmonary grade", LeukostasisVerdict.Organ.PULMONARY));
+        list.add(grade("findings.neurologicalGrade", "Neurological grade", LeukostasisVerdict.Organ.NEUROLOGICAL));
+        list.add(grade("findings.otherOrganGrade", "Other organs grade", LeukostasisVerdict.Organ.OTHER));
         list.add(sign("findings.mucosalBleeding", "Mucosal bleeding (nose, gums)"));
         list.add(sign("findings.visualDisturbance", "Visual disturbance"));
         list.add(choice(f, "findings.retinopathy", "Fundoscopy", List.of(
@@ -116,12 +117,7 @@ public final class FormFields {
         return List.copyOf(list);
     }
 
-    /** The organ systems that are graded 0–3, as the leukostasis grading names them. */
-    public enum Organ {
-        PULMONARY, NEUROLOGICAL, OTHER
-    }
-
-    private static FieldSpec grade(String path, String label, Organ organ) {
+    private static FieldSpec grade(String path, String label, LeukostasisVerdict.Organ organ) {
         List<Choice> choices = new ArrayList<>();
         choices.add(new Choice("", NOT_ASSESSED));
         for (int g = 0; g <= 3; g++) {

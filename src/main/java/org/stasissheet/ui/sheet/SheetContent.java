@@ -15,8 +15,11 @@ import org.stasissheet.flow.WhatIf;
 import org.stasissheet.measure.Estimate;
 import org.stasissheet.measure.Numbers;
 import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
+import org.stasissheet.rules.LeukostasisVerdict;
 import org.stasissheet.rules.Level;
 import org.stasissheet.rules.Provenance;
+import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.ui.chart.FlowChartModel;
 import org.stasissheet.ui.chart.FlowSeries;
 import org.stasissheet.worksheet.InputLine;
@@ -109,11 +112,46 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     }
 
     static List<VerdictCard> verdicts(Worksheet ws) {
-        return List.of(); // RULES-PENDING
+        HyperviscosityVerdict hv = ws.hyperviscosity();
+        List<String> hvLines = new ArrayList<>();
+        hvLines.add(hv.reason());
+        hvLines.add("Rests on: " + words(hv.route().code()));
+        if (!hv.unassessed().isEmpty()) {
+            hvLines.add("Not assessed, counted as absent: " + String.join(", ", hv.unassessed()));
+        }
+        boolean hvRaised = hv.assessment() == HyperviscosityVerdict.Assessment.LIKELY
+                || hv.assessment() == HyperviscosityVerdict.Assessment.POSSIBLE;
+
+        LeukostasisVerdict lk = ws.leukostasis();
+        String lkWord = upper(words(lk.probability().code())) + lk.score().map(s -> " (score " + s + " of 3)").orElse("");
+        boolean lkRaised = lk.score().map(s -> s >= 1).orElse(false);
+
+        TumorLysisVerdict tl = ws.tumorLysis();
+        String tlWord = "LABORATORY " + yesNo(tl.laboratory()) + " · CLINICAL " + yesNo(tl.clinical());
+        List<String> tlLines = new ArrayList<>();
+        tlLines.add(tl.reason());
+        for (TumorLysisVerdict.Criterion c : tl.criteria()) {
+            tlLines.add((c.met() ? "met: " : "not met: ") + c.analyte().label() + " "
+                    + c.value().map(q -> Numbers.rounded(q.value(), 4) + " " + q.unit()).orElse("–") + " · " + c.how());
+        }
+        tlLines.add(tl.window());
+        boolean tlRaised = tl.laboratory().orElse(false);
+        return List.of(
+                new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(words(hv.assessment().code())),
+                        hvRaised, hvLines),
+                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", lkWord, lkRaised, List.of(lk.reason())),
+                new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", tlWord, tlRaised, tlLines));
     }
 
     static List<FlagGroup> flagGroups(Worksheet ws) {
-        return List.of(); // RULES-PENDING
+        List<FlagGroup> groups = new ArrayList<>();
+        for (Level level : Level.values()) {
+            List<Flag> flags = ws.flags().stream().filter(f -> f.level() == level).toList();
+            if (!flags.isEmpty()) {
+                groups.add(new FlagGroup(level, flags));
+            }
+        }
+        return groups;
     }
 
     static FlowChartModel flow(FlowEstimates f) {
