@@ -30,14 +30,17 @@ public final class FlowChartView {
     private final LineChart<Number, Number> chart;
     private final FlowPane toggles = new FlowPane(10, 4);
     private final VBox notes = new VBox(2);
+    private final VBox assumptions = new VBox(2);
     private final VBox root;
     private final Map<String, Boolean> shown = new LinkedHashMap<>();
+    /** Held here: a binding passed in is otherwise only weakly reachable and would stop updating. */
+    private final ObservableValue<FlowChartModel> model;
 
     public FlowChartView(ObservableValue<FlowChartModel> model) {
-        Objects.requireNonNull(model, "model");
+        this.model = Objects.requireNonNull(model, "model");
         LogAxis x = new LogAxis("vessel diameter (µm, log scale)", MIN_DIAMETER_UM, MAX_DIAMETER_UM);
         NumberAxis y = new NumberAxis();
-        y.setLabel("relative flow (1 = reference blood)");
+        y.setLabel("relative flow (1 = reference)");
         y.setForceZeroInRange(true);
         chart = new LineChart<>(x, y);
         chart.setId("flow-chart");
@@ -52,8 +55,10 @@ public final class FlowChartView {
         notes.getStyleClass().add("flow-notes");
         Label title = new Label("Microvascular flow: an illustration, not a measurement");
         title.getStyleClass().add("sheet-heading");
-        root = new VBox(6, title, toggles, chart, notes);
+        assumptions.setId("what-if-assumptions");
+        root = new VBox(6, title, toggles, chart, assumptions, notes);
         root.getStyleClass().add("flow-section");
+        root.setId("flow-section");
         model.addListener((o, was, now) -> show(now));
         show(model.getValue());
     }
@@ -85,6 +90,7 @@ public final class FlowChartView {
 
     private void plot(FlowChartModel m) {
         chart.getData().clear();
+        assumptions.getChildren().clear();
         StringBuilder spoken = new StringBuilder("Flow chart. ");
         if (!m.series().isEmpty()) {
             XYChart.Series<Number, Number> reference = new XYChart.Series<>();
@@ -97,6 +103,7 @@ public final class FlowChartView {
             if (!shown.getOrDefault(s.id(), s.shownAtStart())) {
                 continue;
             }
+            s.assumptions().forEach(a -> assumptions.getChildren().add(note(s.name() + ": " + a, "flow-assumption")));
             XYChart.Series<Number, Number> series = new XYChart.Series<>();
             series.setName(s.name());
             spoken.append(s.name()).append(':');

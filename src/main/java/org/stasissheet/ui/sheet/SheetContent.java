@@ -12,6 +12,7 @@ import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowPoint;
 import org.stasissheet.flow.Leukocrit;
 import org.stasissheet.flow.WhatIf;
+import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Estimate;
 import org.stasissheet.measure.Numbers;
 import org.stasissheet.rules.Flag;
@@ -127,12 +128,12 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         boolean lkRaised = lk.score().map(s -> s >= 1).orElse(false);
 
         TumorLysisVerdict tl = ws.tumorLysis();
-        String tlWord = "LABORATORY " + yesNo(tl.laboratory()) + " · CLINICAL " + yesNo(tl.clinical());
+        String tlWord = "LABORATORY " + yesNo(tl.laboratory()) + "\nCLINICAL " + yesNo(tl.clinical());
         List<String> tlLines = new ArrayList<>();
         tlLines.add(tl.reason());
         for (TumorLysisVerdict.Criterion c : tl.criteria()) {
-            tlLines.add((c.met() ? "met: " : "not met: ") + c.analyte().label() + " "
-                    + c.value().map(q -> Numbers.rounded(q.value(), 4) + " " + q.unit()).orElse("–") + " · " + c.how());
+            tlLines.add((c.met() ? "MET: " : "not met: ") + c.analyte().label()
+                    + c.value().map(q -> " " + Numbers.rounded(q.value(), 4) + " " + q.unit()).orElse("") + " · " + c.how());
         }
         tlLines.add(tl.window());
         boolean tlRaised = tl.laboratory().orElse(false);
@@ -157,12 +158,13 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     static FlowChartModel flow(FlowEstimates f) {
         List<FlowSeries> series = new ArrayList<>();
         List<String> missing = new ArrayList<>();
-        add(series, missing, "in-vitro", "Patient, Pries 1992 in vitro law", true, f.byDiameter());
-        add(series, missing, "in-vivo", "Patient, Pries 1994 in vivo law", true, f.inVivo());
+        add(series, missing, "in-vitro", "Patient, Pries 1992 in vitro law", true, f.byDiameter(), List.of());
+        add(series, missing, "in-vivo", "Patient, Pries 1994 in vivo law", true, f.inVivo(), List.of());
         add(series, missing, "leukocrit", "Patient with leukocrit added (approximation)", true,
-                f.leukocrit().map(Leukocrit::byDiameter));
+                f.leukocrit().map(Leukocrit::byDiameter), List.of());
         for (WhatIf w : f.whatIf()) {
-            add(series, missing, "what-if-" + w.id(), "What if: " + w.name(), false, w.byDiameter());
+            add(series, missing, "what-if-" + w.id(), "What if: " + w.name(), false, w.byDiameter(),
+                    w.assumptions());
         }
         List<String> notes = new ArrayList<>();
         notes.add("Relative flow = reference blood ÷ patient (hematocrit " + Numbers.plain(f.referenceHematocrit())
@@ -172,15 +174,12 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         f.leukocrit().known().ifPresent(l -> notes.add("Leukocrit " + Numbers.rounded(l.leukocrit(), 3) + " = WBC "
                 + Numbers.rounded(l.wbc(), 3) + " ×10⁹/L × " + Numbers.plain(l.meanCellVolumeFl()) + " fL ("
                 + l.cellType() + ", from memory); it only ever lowers the estimate."));
-        for (WhatIf w : f.whatIf()) {
-            w.assumptions().forEach(a -> notes.add(w.name() + ": " + a));
-        }
         return new FlowChartModel(series, missing, notes, f.caveats());
     }
 
     private static void add(List<FlowSeries> series, List<String> missing, String id, String name, boolean shown,
-                            Estimate<List<FlowPoint>> points) {
-        points.known().ifPresentOrElse(p -> series.add(new FlowSeries(id, name, p, shown)),
+                            Estimate<List<FlowPoint>> points, List<String> assumptions) {
+        points.known().ifPresentOrElse(p -> series.add(new FlowSeries(id, name, p, shown, assumptions)),
                 () -> missing.add(name + ": " + points.whyUnknown().orElseThrow()));
     }
 
@@ -214,12 +213,19 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     static List<Row> inputs(Worksheet ws) {
         List<Row> rows = new ArrayList<>();
         for (InputLine line : ws.inputs()) {
-            String entered = Numbers.rounded(line.entered().value(), 4) + " " + line.entered().unit();
-            String canonical = Numbers.rounded(line.canonical().value(), 4) + " " + line.canonical().unit();
+            Optional<Analyte> analyte = Analyte.byKey(line.path().substring(line.path().lastIndexOf('.') + 1));
+            String entered = Numbers.rounded(line.entered().value(), 4) + " " + shownUnit(analyte, line.entered().unit());
+            String canonical = Numbers.rounded(line.canonical().value(), 4) + " "
+                    + shownUnit(analyte, line.canonical().unit());
             rows.add(new Row(line.label() + " (" + line.path() + ")",
                     line.entered().equals(line.canonical()) ? entered : entered + "  =  " + canonical));
         }
         return rows;
+    }
+
+    /** The unit as clinicians write it (×10⁹/L, µmol/L), falling back to the UCUM code. */
+    private static String shownUnit(Optional<Analyte> analyte, String ucum) {
+        return analyte.flatMap(a -> a.unitOption(ucum)).map(u -> u.display()).orElse(ucum);
     }
 
     private static String value(Estimate<Double> e, String unit) {

@@ -7,7 +7,6 @@ import javafx.css.PseudoClass;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
-import javafx.scene.control.TitledPane;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
@@ -37,6 +36,8 @@ public final class SheetView {
     private final VBox flags = new VBox(6);
     private final VBox apheresis = new VBox(6);
     private final GridPane inputs = new GridPane();
+    /** Held so the chart (and the binding feeding it) lives as long as this view. */
+    private final FlowChartView chart;
 
     public SheetView(SheetViewModel model) {
         Objects.requireNonNull(model, "model");
@@ -44,6 +45,8 @@ public final class SheetView {
         root.getStyleClass().add("sheet-side");
         root.setAccessibleText("Worksheet");
         body.getStyleClass().add("sheet-body");
+        body.setMinWidth(0);
+        verdicts.prefWrapLengthProperty().bind(root.widthProperty().subtract(40));
         badge.setId("rule-set-badge");
         badge.getStyleClass().add("rule-set-badge");
         local.setId("local-protocol");
@@ -59,7 +62,7 @@ public final class SheetView {
         verdicts.setId("verdicts");
         flags.setId("flags");
         inputs.getStyleClass().add("sheet-grid");
-        FlowChartView chart = new FlowChartView(Bindings.createObjectBinding(
+        chart = new FlowChartView(Bindings.createObjectBinding(
                 () -> model.content().flow(), model.contentProperty()));
         HBox badgeRow = new HBox(8, badge);
         body.getChildren().addAll(badgeRow, local, leftOut, blocking,
@@ -100,6 +103,7 @@ public final class SheetView {
         Label title = new Label(v.title());
         title.getStyleClass().add("verdict-title");
         Label word = new Label((v.raised() ? "▲ " : "· ") + v.word());
+        word.setWrapText(true);
         word.setId("verdict-" + v.id() + "-word");
         word.getStyleClass().add("verdict-word");
         VBox card = new VBox(4, title, word);
@@ -136,9 +140,22 @@ public final class SheetView {
                 Label basis = new Label("Basis: " + basisWords(f.basis()) + "   ·   rule " + f.id());
                 basis.getStyleClass().add("flag-basis");
                 VBox detail = new VBox(3, explanation, source, basis);
-                TitledPane pane = new TitledPane("[" + g.level().symbol() + "] " + g.level().word() + ": " + f.title(),
-                        detail);
-                pane.setExpanded(false);
+                // A wrapping title and a details toggle instead of a titled pane: nothing is cut off.
+                Label title = new Label("[" + g.level().symbol() + "] " + g.level().word() + ": " + f.title());
+                title.setWrapText(true);
+                title.getStyleClass().add("flag-title");
+                javafx.scene.control.ToggleButton more = new javafx.scene.control.ToggleButton("source and basis");
+                more.setId("flag-" + f.id().replaceAll("[^A-Za-z0-9_-]", "_") + "-details");
+                more.getStyleClass().add("flag-details-toggle");
+                more.setAccessibleText("Show the explanation, source and basis of: " + f.title());
+                more.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+                detail.visibleProperty().bind(more.selectedProperty());
+                detail.managedProperty().bind(more.selectedProperty());
+                detail.getStyleClass().add("flag-detail");
+                HBox titleRow = new HBox(8, title, more);
+                HBox.setHgrow(title, Priority.ALWAYS);
+                title.setMaxWidth(Double.MAX_VALUE);
+                VBox pane = new VBox(2, titleRow, detail);
                 pane.setId("flag-" + f.id().replaceAll("[^A-Za-z0-9_-]", "_"));
                 pane.getStyleClass().addAll("flag", "level-" + g.level().code());
                 pane.setAccessibleText(g.level().word() + ": " + f.title());
