@@ -116,6 +116,23 @@ class FormVerdictTest {
     }
 
     @Test
+    @DisplayName("regression: the flow chart keeps following edits after a garbage collection (its binding was collected)")
+    void chartFollowsEdits(FxRobot robot) throws Exception {
+        @SuppressWarnings("unchecked")
+        javafx.scene.chart.LineChart<Number, Number> chart = robot.lookup("#flow-chart").query();
+        double before = chart.getData().get(1).getData().get(0).getYValue().doubleValue();
+        System.gc();
+        FormHarness.fx(() -> {
+            window.session().entry().field("labs.hematocrit").textProperty().set("45");
+            window.session().recomputeNow();
+        });
+        double after = chart.getData().get(1).getData().get(0).getYValue().doubleValue();
+        assertNotEquals(before, after, 1e-9, "a higher hematocrit changes the relative flow");
+        assertEquals(window.session().completeWorksheetProperty().get().orElseThrow().flow().byDiameter().known()
+                .orElseThrow().get(0).relativeFlow(), after, 1e-12, "the chart plots the worksheet's own numbers");
+    }
+
+    @Test
     @DisplayName("the rule-set badge shows name, version and short hash; the standing caution is always on screen")
     void badgeAndCaution(FxRobot robot) {
         Label badge = robot.lookup("#rule-set-badge").query();
