@@ -166,6 +166,62 @@ class FormWindowTest {
         assertEquals(written.toAbsolutePath().normalize(), window.preferences().get().recentFiles().get(0));
     }
 
+    @Test
+    @DisplayName("a local rule folder is used and badged LOCAL PROTOCOL; a refused folder changes nothing")
+    void ruleFolder(FxRobot robot) throws Exception {
+        Path local = data.resolve("local-rules");
+        Files.createDirectories(local);
+        try (var files = Files.list(Path.of("rules"))) {
+            for (Path f : files.toList()) {
+                Files.copy(f, local.resolve(f.getFileName()));
+            }
+        }
+        // a hospital that starts treating from 3.5 cP: any edit makes the set local
+        Path hv = local.resolve("hyperviscosity.yaml");
+        Files.writeString(hv, Files.readString(hv).replaceFirst("value: 4.0", "value: 3.5"));
+        shell.files.add(local);
+        FormHarness.fx(() -> window.actions().chooseRuleFolder());
+        FormHarness.settle(window);
+        assertTrue(window.session().ruleSetProperty().get().provenance().local());
+        assertTrue(((Label) node(robot, "local-protocol")).isVisible());
+        assertEquals(java.util.Optional.of(local), window.preferences().get().ruleFolder());
+
+        Path broken = data.resolve("broken-rules");
+        Files.createDirectories(broken);
+        Files.writeString(broken.resolve("manifest.yaml"), "format: stasis-rules/1\nname: [unclosed\n");
+        var before = window.session().ruleSetProperty().get();
+        FormHarness.fx(() -> window.actions().useRuleFolder(broken));
+        FormHarness.settle(window);
+        assertTrue(window.session().ruleSetProperty().get() == before, "the rules in use are unchanged");
+        assertTrue(shell.asked.stream().anyMatch(q -> q.startsWith("problems: The rule set was refused")),
+                shell.asked.toString());
+        assertFalse(shell.problemsShown.get(shell.problemsShown.size() - 1).isEmpty());
+    }
+
+    @Test
+    @DisplayName("opening a file with mistakes keeps every value and shows each message beside its field")
+    void openWithMistakes(FxRobot robot) throws Exception {
+        Path file = data.resolve("mistakes.json");
+        Files.writeString(file, """
+                {"format":"stasis-case/1",
+                 "patient":{"label":"Invented patient, bed 2","ageYears":"seventy"},
+                 "labs":{"wbc":{"value":150000,"unit":"10*9/L"},"hemoglobn":{"value":9,"unit":"g/dL"}},
+                 "extra":{"ward":"St. Alder Infirmary"}}
+                """);
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        assertEquals("seventy", window.session().entry().field("patient.ageYears").textProperty().get());
+        assertEquals("150000", window.session().entry().field("labs.wbc").textProperty().get());
+        assertFalse(window.session().entry().field("patient.ageYears").problemProperty().get().isEmpty());
+        assertFalse(window.session().entry().field("labs.wbc").problemProperty().get().isEmpty());
+        assertTrue(window.session().entry().otherProblemsProperty().stream()
+                .anyMatch(p -> p.startsWith("labs.hemoglobn")), window.session().entry().otherProblemsProperty()
+                .toString());
+        String saved = new String(window.session().caseJson(), java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(saved.contains("hemoglobn") && saved.contains("St. Alder Infirmary"), "nothing read is dropped");
+        assertFalse(window.session().dirtyProperty().get(), "as opened");
+    }
+
     private static String read(Path p) {
         try {
             return Files.readString(p);
