@@ -1,11 +1,17 @@
 package org.stasissheet.cli;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 import java.util.Optional;
-import org.stasissheet.files.CaseFiles;
 import org.stasissheet.files.RuleSources;
+import org.stasissheet.files.WorksheetPdfs;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.CaseReader;
 import org.stasissheet.rules.LoadResult;
@@ -16,11 +22,59 @@ import org.stasissheet.rules.RuleSet;
  * into an {@link InvalidInputException} naming every problem.
  */
 final class Inputs {
+    /** Largest worksheet PDF read back, in bytes (a worksheet is well under 1 MiB; 32 MiB leaves room). */
+    static final int MAX_PDF_BYTES = 32 << 20;
+
     private Inputs() {
     }
 
+    /**
+     * A case with the JSON it was read from: the bytes go into the PDF as the record, so they are the case file
+     * itself (or, for a worksheet PDF, the case file embedded in it), read once.
+     */
+    record LoadedCase(byte[] json, Case value) {
+        LoadedCase {
+            Objects.requireNonNull(json, "json");
+            Objects.requireNonNull(value, "value");
+            json = json.clone();
+        }
+
+        @Override
+        public byte[] json() {
+            return json.clone();
+        }
+    }
+
+    /** A case file (stasis-case/1 JSON) or a worksheet PDF (by its .pdf name or its %PDF start). */
     static Case readCase(Path file) {
-        CaseReader.Result result = CaseFiles.read(file);
+        return loadCase(file).value();
+    }
+
+    static LoadedCase loadCase(Path file) {
+        byte[] json = caseBytes(file);
+        return new LoadedCase(json, parseCase(file, json));
+    }
+
+    /** The case JSON: the file's bytes, or the case embedded in a worksheet PDF. */
+    static byte[] caseBytes(Path file) {
+        byte[] bytes = readLimited(file, MAX_PDF_BYTES);
+        if (!WorksheetPdfs.looksLikePdf(file, bytes)) {
+            if (bytes.length > CaseReader.MAX_BYTES) {
+                throw unreadable(file, "it is larger than " + CaseReader.MAX_BYTES + " bytes (1 MiB), the most a "
+                        + "case file may be");
+            }
+            return bytes;
+        }
+        try {
+            return WorksheetPdfs.extractCase(bytes);
+        } catch (IOException e) {
+            throw unreadable(file, e.getMessage());
+        }
+    }
+
+    /** The case in these bytes, or every problem with its path in the file. */
+    static Case parseCase(Path file, byte[] json) {
+        CaseReader.Result result = CaseReader.read(json);
         if (result instanceof CaseReader.Accepted accepted) {
             return accepted.c();
         }
@@ -41,5 +95,28 @@ final class Inputs {
             throw new InvalidInputException(lines);
         }
         return ((LoadResult.Loaded) result).ruleSet();
+    }
+
+    private static byte[] readLimited(Path file, int limit) {
+        if (Files.isDirectory(file)) {
+            throw unreadable(file, "it is a folder, not a case file");
+        }
+        try (InputStream in = Files.newInputStream(file)) {
+            byte[] bytes = in.readNBytes(limit + 1);
+            if (bytes.length > limit) {
+                throw unreadable(file, "it is larger than " + limit + " bytes");
+            }
+            return bytes;
+        } catch (NoSuchFileException e) {
+            throw unreadable(file, "file does not exist");
+        } catch (AccessDeniedException e) {
+            throw unreadable(file, "permission denied");
+        } catch (IOException e) {
+            throw unreadable(file, e.getClass().getSimpleName());
+        }
+    }
+
+    private static InvalidInputException unreadable(Path file, String why) {
+        return new InvalidInputException("cannot read " + file + ": " + why);
     }
 }

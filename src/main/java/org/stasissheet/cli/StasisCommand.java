@@ -11,7 +11,8 @@ import picocli.CommandLine.Command;
         description = "Sourced worksheet for hyperviscosity syndrome and leukostasis risk. "
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
                 + "and licensed practice.",
-        subcommands = {AssessCommand.class, RulesCommand.class})
+        subcommands = {AssessCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
+                RulesCommand.class})
 public final class StasisCommand implements Runnable {
 
     @CommandLine.Spec

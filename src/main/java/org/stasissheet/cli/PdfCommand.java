@@ -1,0 +1,55 @@
+package org.stasissheet.cli;
+
+import java.nio.file.Path;
+import java.time.OffsetDateTime;
+import java.util.concurrent.Callable;
+import org.stasissheet.report.Paper;
+import org.stasissheet.report.PdfOptions;
+import org.stasissheet.report.WorksheetPdf;
+import org.stasissheet.worksheet.Assessor;
+import org.stasissheet.worksheet.Worksheet;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code pdf CASE -o OUT.pdf}: writes the worksheet of one case as a PDF with the case embedded. */
+@Command(name = "pdf", mixinStandardHelpOptions = true,
+        description = "Write the worksheet of one case as a PDF (the case file is embedded in it).")
+final class PdfCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")
+    Path caseFile;
+
+    @Option(names = {"-o", "--output"}, required = true, paramLabel = "OUT.pdf", description = "the PDF to write")
+    Path output;
+
+    @Mixin
+    PdfLayoutOptions layout;
+
+    @Mixin
+    RulesOption rules;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile);
+        Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
+        byte[] pdf = WorksheetPdf.render(sheet, layout.options(), OffsetDateTime.now(), loaded.json());
+        OutputFiles.write(output, pdf);
+        spec.commandLine().getOut().println("wrote " + output);
+        spec.commandLine().getOut().flush();
+        return ExitCode.DONE;
+    }
+
+    /** Accepts {@code a4} or {@code letter}; anything else is a usage error (exit 2). */
+    static final class PaperConverter implements picocli.CommandLine.ITypeConverter<Paper> {
+        @Override
+        public Paper convert(String value) {
+            return Paper.parse(value);
+        }
+    }
+}

@@ -1,0 +1,25 @@
+package org.stasissheet.cli;
+
+import org.stasissheet.report.Paper;
+import org.stasissheet.report.PdfOptions;
+import picocli.CommandLine.Option;
+
+/** The PDF options shared by {@code pdf} and {@code triage}. */
+final class PdfLayoutOptions {
+    @Option(names = "--paper", paramLabel = "a4|letter", converter = PdfCommand.PaperConverter.class,
+            defaultValue = "a4", description = "paper size: a4 (default) or letter")
+    Paper paper;
+
+    @Option(names = "--no-identifiers",
+            description = "leave the patient label out: of the whole PDF, and of summary.csv in triage "
+                    + "(teaching or audit copies)")
+    boolean noIdentifiers;
+
+    PdfOptions options() {
+        return new PdfOptions(paper, !noIdentifiers, ToolVersion.get());
+    }
+
+    boolean includeIdentifiers() {
+        return !noIdentifiers;
+    }
+}
