@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
+import java.time.OffsetDateTime;
 import java.time.ZoneId;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
@@ -17,12 +19,18 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleObjectProperty;
 import org.stasissheet.cli.InvalidInputException;
+import org.stasissheet.cli.ToolVersion;
+import org.stasissheet.files.WorksheetPdfs;
 import org.stasissheet.intake.CaseReader;
+import org.stasissheet.report.HandoffNote;
+import org.stasissheet.report.PdfOptions;
+import org.stasissheet.report.WorksheetPdf;
 import org.stasissheet.rules.RuleSet;
 import org.stasissheet.ui.draft.Autosaver;
 import org.stasissheet.ui.draft.DraftStore;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.FormState;
+import org.stasissheet.worksheet.Worksheet;
 
 /**
  * The commands of the window (new, open, save, export, copy the note, rule folder, close), each the same from
@@ -43,11 +51,12 @@ public final class Actions {
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
     private final ObjectProperty<Optional<Path>> ruleFolder = new SimpleObjectProperty<>(this, "ruleFolder",
             Optional.empty());
+    private final Clock clock;
     private final ZoneId zone;
 
     Actions(CaseSession session, Shell shell, Background background, DraftStore drafts, Autosaver autosaver,
             PreferencesStore preferenceStore, ObjectProperty<Preferences> preferences,
-            java.util.function.Function<Optional<Path>, RuleSet> ruleLoader, ZoneId zone) {
+            java.util.function.Function<Optional<Path>, RuleSet> ruleLoader, Clock clock) {
         this.session = Objects.requireNonNull(session, "session");
         this.shell = Objects.requireNonNull(shell, "shell");
         this.background = Objects.requireNonNull(background, "background");
@@ -56,7 +65,8 @@ public final class Actions {
         this.preferenceStore = Objects.requireNonNull(preferenceStore, "preferenceStore");
         this.preferences = Objects.requireNonNull(preferences, "preferences");
         this.ruleLoader = Objects.requireNonNull(ruleLoader, "ruleLoader");
-        this.zone = Objects.requireNonNull(zone, "zone");
+        this.clock = Objects.requireNonNull(clock, "clock");
+        this.zone = clock.getZone();
         ruleFolder.set(preferences.get().ruleFolder());
     }
 
@@ -123,8 +133,9 @@ public final class Actions {
     /** Opens a case JSON or a worksheet PDF, without asking about unsaved changes (callers have asked). */
     public void openFile(Path file) {
         status.set("Opening " + file.getFileName() + "…");
-        boolean pdf = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
-        background.run(() -> CaseOpening.read(file, pdf), opened -> {
+        boolean pdfByName = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
+        background.run(() -> CaseOpening.read(file, pdfByName), opened -> {
+            boolean pdf = pdfByName || opened.fromPdf();
             if (opened.problems().isEmpty()) {
                 Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
                 if (state.isPresent()) {
@@ -227,6 +238,50 @@ public final class Actions {
 
     private int countProblems() {
         return CaseReader.read(session.caseJson()) instanceof CaseReader.Rejected r ? r.problems().size() : 0;
+    }
+
+    /**
+     * Writes the worksheet PDF of the complete case (with the case file embedded, so the PDF can be opened again).
+     * Rendering and writing run on the background thread; the form stays usable meanwhile.
+     */
+    public void exportPdf() {
+        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (sheet.isEmpty()) {
+            shell.showProblems("No PDF: the case has problems", List.of(
+                    "Fix the entries marked PROBLEM first: a PDF is only made of a complete case."));
+            return;
+        }
+        String base = session.documentProperty().get().map(p -> p.getFileName().toString().replaceFirst(
+                "\\.json$", "")).orElse("worksheet");
+        Optional<Path> target = shell.choosePdfTarget(base + ".pdf", session.documentProperty().get())
+                .map(p -> withExtension(p, ".pdf"));
+        if (target.isEmpty()) {
+            return;
+        }
+        byte[] json = session.caseJson();
+        OffsetDateTime now = OffsetDateTime.now(clock);
+        Worksheet ws = sheet.get();
+        status.set("Writing " + target.get().getFileName() + "…");
+        background.run(() -> {
+            byte[] pdf = WorksheetPdf.render(ws, PdfOptions.defaults(ToolVersion.get()), now, json);
+            Storage.writeDocument(target.get(), pdf);
+            return target.get();
+        }, written -> status.set("PDF written: " + written), e -> {
+            status.set("PDF NOT written: " + oneLine(e));
+            shell.showProblems("The PDF was not written", List.of(oneLine(e)));
+        });
+    }
+
+    /** Puts the handoff note of the complete case on the clipboard (without the patient label). */
+    public void copyHandoffNote() {
+        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (sheet.isEmpty()) {
+            shell.showProblems("No handoff note: the case has problems", List.of(
+                    "Fix the entries marked PROBLEM first: a note is only written for a complete case."));
+            return;
+        }
+        shell.copyToClipboard(HandoffNote.render(sheet.get(), false));
+        status.set("Handoff note copied to the clipboard (no patient label in it)");
     }
 
     /** Loads the rule set of a folder the user picks; a refused set changes nothing and lists every problem. */
@@ -332,32 +387,50 @@ public final class Actions {
     }
 
     /** What opening a file gave: the case as JSON bytes, or why not. */
-    record Opened(byte[] caseJson, List<String> problems) {
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf) {
         Opened {
             Objects.requireNonNull(caseJson, "caseJson");
             problems = List.copyOf(problems);
+        }
+
+        Opened(byte[] caseJson, List<String> problems) {
+            this(caseJson, problems, false);
         }
     }
 
     /** The file reads of {@link #openFile}, on the background thread. */
     static final class CaseOpening {
-        /** Larger files are refused before reading, as the case reader would refuse them. */
-        static final long MAX_BYTES = CaseReader.MAX_BYTES;
+        /** The largest worksheet PDF read (the command line's limit too): 32 MiB. */
+        static final long MAX_PDF_BYTES = 32L << 20;
 
         private CaseOpening() {
         }
 
-        static Opened read(Path file, boolean pdf) throws IOException {
-            if (pdf) {
-                return new Opened(new byte[0], List.of("reading a case back from a worksheet PDF is not in this build"));
+        /** The case JSON of a case file, or of the case embedded in a worksheet PDF (by name or {@code %PDF}). */
+        static Opened read(Path file, boolean pdfByName) throws IOException {
+            if (Files.isDirectory(file)) {
+                return new Opened(new byte[0], List.of(file.getFileName() + " is a folder, not a case file"));
             }
             long size = Files.size(file);
-            if (size > MAX_BYTES) {
+            if (size > MAX_PDF_BYTES || (!pdfByName && size > CaseReader.MAX_BYTES && !startsAsPdf(file))) {
                 return new Opened(new byte[0], List.of(file.getFileName() + ": " + size
-                        + " bytes is larger than a case file can be (" + MAX_BYTES + " bytes)"));
+                        + " bytes is larger than a case file can be (" + CaseReader.MAX_BYTES + " bytes)"));
             }
             byte[] bytes = Files.readAllBytes(file);
+            if (WorksheetPdfs.looksLikePdf(file, bytes)) {
+                try {
+                    return new Opened(WorksheetPdfs.extractCase(bytes), List.of(), true);
+                } catch (IOException e) {
+                    return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
+                }
+            }
             return new Opened(bytes, List.of());
+        }
+
+        private static boolean startsAsPdf(Path file) throws IOException {
+            try (var in = Files.newInputStream(file)) {
+                return WorksheetPdfs.startsWithPdfMagic(in.readNBytes(4));
+            }
         }
     }
 

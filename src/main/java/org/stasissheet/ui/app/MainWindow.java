@@ -2,7 +2,6 @@ package org.stasissheet.ui.app;
 
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
-import java.time.ZoneId;
 import java.time.format.DateTimeFormatter;
 import java.time.temporal.ChronoUnit;
 import java.util.Objects;
@@ -67,9 +66,8 @@ public final class MainWindow {
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
         autosaver = new Autosaver(drafts, background, entry.editsProperty(), session::caseJson,
                 settings.autosaveDelay(), settings.clock());
-        ZoneId zone = settings.clock().getZone();
         actions = new Actions(session, shell, background, drafts, autosaver, preferenceStore, preferences,
-                settings.rules(), zone);
+                settings.rules(), settings.clock());
         actions.ruleFolderProperty().set(first.folder());
         entry.unitSystemProperty().bind(Bindings.createObjectBinding(() -> preferences.get().units(), preferences));
 
@@ -190,9 +188,18 @@ public final class MainWindow {
                 new SeparatorMenuItem(), quit);
 
         Menu sheet = new Menu("_Worksheet");
-        MenuItem export = item("_Export PDF…", "Shortcut+E", "action-export", this::exportPdf);
-        MenuItem note = item("Copy the _handoff note", "Shortcut+Shift+C", "action-copy-note", this::copyNote);
-        sheet.getItems().addAll(export, note);
+        MenuItem export = item("_Export PDF…", "Shortcut+E", "action-export", actions::exportPdf);
+        MenuItem note = item("Copy the _handoff note", "Shortcut+Shift+C", "action-copy-note",
+                actions::copyHandoffNote);
+        // Only a complete case makes a PDF or a note; the menu says why when it is not.
+        for (MenuItem m : java.util.List.of(export, note)) {
+            m.disableProperty().bind(Bindings.createBooleanBinding(
+                    () -> session.completeWorksheetProperty().get().isEmpty(), session.completeWorksheetProperty()));
+        }
+        MenuItem why = new MenuItem("(fix the entries marked PROBLEM to export)");
+        why.setDisable(true);
+        why.visibleProperty().bind(export.disableProperty());
+        sheet.getItems().addAll(export, note, why);
 
         Menu rules = new Menu("_Rules");
         MenuItem folder = item("Use a _local rule folder…", "Shortcut+L", "action-rule-folder",
@@ -227,21 +234,7 @@ public final class MainWindow {
 
         MenuBar bar = new MenuBar(file, sheet, rules, view);
         bar.setId("menu-bar");
-        exportDisabled(export, note);
         return bar;
-    }
-
-    private void exportDisabled(MenuItem export, MenuItem note) {
-        export.setDisable(true);
-        note.setDisable(true);
-    }
-
-    private void exportPdf() {
-        // wired with the PDF renderer
-    }
-
-    private void copyNote() {
-        // wired with the handoff note renderer
     }
 
     private void fillRecent(Menu recent) {

@@ -222,6 +222,54 @@ class FormWindowTest {
         assertFalse(window.session().dirtyProperty().get(), "as opened");
     }
 
+    @Test
+    @DisplayName("export writes a worksheet PDF off the JavaFX thread; opening that PDF gives the same case back")
+    void exportAndReopen(FxRobot robot) throws Exception {
+        Path pdf = data.resolve("out").resolve("bed4");
+        Files.createDirectories(pdf.getParent());
+        shell.files.add(pdf);
+        FormHarness.fx(() -> window.actions().exportPdf());
+        FormHarness.settle(window);
+        Path written = data.resolve("out").resolve("bed4.pdf");
+        assertTrue(Files.exists(written), shell.asked.toString());
+        byte[] bytes = Files.readAllBytes(written);
+        assertTrue(org.stasissheet.files.WorksheetPdfs.startsWithPdfMagic(bytes));
+        try (var doc = org.apache.pdfbox.Loader.loadPDF(bytes)) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+            assertTrue(text.replaceAll("\\s+", " ").contains("never replaces"), "the standing caution is printed");
+        }
+        byte[] before = window.session().caseJson();
+
+        FormHarness.fx(() -> window.actions().newCase());
+        assertEquals("", window.session().entry().field("patient.label").textProperty().get());
+        FormHarness.fx(() -> window.actions().openFile(written));
+        FormHarness.settle(window);
+        assertEquals("Demo patient A, ward 7", window.session().entry().field("patient.label").textProperty().get());
+        assertEquals(new String(before, java.nio.charset.StandardCharsets.UTF_8),
+                new String(window.session().caseJson(), java.nio.charset.StandardCharsets.UTF_8));
+        assertTrue(window.session().documentProperty().get().isEmpty(), "Save does not overwrite the PDF");
+    }
+
+    @Test
+    @DisplayName("the handoff note goes to the clipboard, the same text the report renders, without the label")
+    void handoffNote(FxRobot robot) throws Exception {
+        FormHarness.fx(() -> window.actions().copyHandoffNote());
+        assertEquals(1, shell.clipboard.size());
+        var ws = window.session().completeWorksheetProperty().get().orElseThrow();
+        assertEquals(org.stasissheet.report.HandoffNote.render(ws, false), shell.clipboard.get(0));
+        assertFalse(shell.clipboard.get(0).contains("Demo patient A"));
+    }
+
+    @Test
+    @DisplayName("no PDF and no note while a field has a problem; the menu items say so")
+    void exportNeedsCompleteCase(FxRobot robot) throws Exception {
+        type(robot, "labs-wbc", "150000");
+        recompute();
+        FormHarness.fx(() -> window.actions().exportPdf());
+        assertTrue(shell.asked.stream().anyMatch(q -> q.startsWith("problems: No PDF")), shell.asked.toString());
+        assertTrue(shell.asked.stream().noneMatch(q -> q.startsWith("pdf ")));
+    }
+
     private static String read(Path p) {
         try {
             return Files.readString(p);
