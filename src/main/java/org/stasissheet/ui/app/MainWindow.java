@@ -42,8 +42,9 @@ import org.stasissheet.worksheet.Cautions;
  * nothing itself.
  */
 public final class MainWindow {
-    public static final String STYLESHEET = "/org/stasissheet/ui/form.css";
-    public static final String HIGH_CONTRAST = "/org/stasissheet/ui/high-contrast.css";
+    /** Class-path style sheets (JavaFX resolves a scheme-less name through the class loader). */
+    public static final String STYLESHEET = "org/stasissheet/ui/form.css";
+    public static final String HIGH_CONTRAST = "org/stasissheet/ui/high-contrast.css";
 
     private final Stage stage;
     private final CaseSession session;
@@ -90,7 +91,7 @@ public final class MainWindow {
 
         javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
         Scene scene = new Scene(root, Math.min(1280, screen.getWidth()), Math.min(860, screen.getHeight()));
-        scene.getStylesheets().add(Objects.requireNonNull(MainWindow.class.getResource(STYLESHEET)).toExternalForm());
+        scene.getStylesheets().add(STYLESHEET);
         preferences.addListener((o, was, now) -> applyLook(scene, now));
         applyLook(scene, preferences.get());
         stage.setScene(scene);
@@ -151,10 +152,9 @@ public final class MainWindow {
     }
 
     private static void applyLook(Scene scene, Preferences p) {
-        String hc = Objects.requireNonNull(MainWindow.class.getResource(HIGH_CONTRAST)).toExternalForm();
-        scene.getStylesheets().remove(hc);
+        scene.getStylesheets().remove(HIGH_CONTRAST);
         if (p.highContrast()) {
-            scene.getStylesheets().add(hc);
+            scene.getStylesheets().add(HIGH_CONTRAST);
         }
         // Text scales from the system font size: every size in the style sheets is in em of this one.
         scene.getRoot().setStyle("-fx-font-size: " + (javafx.scene.text.Font.getDefault().getSize() * p.textScale())

@@ -104,7 +104,8 @@ class FormAccessibilityTest {
     @Test
     @DisplayName("the high-contrast style sheet is applied and removed by the setting")
     void highContrast() throws Exception {
-        String sheet = MainWindow.class.getResource(MainWindow.HIGH_CONTRAST).toExternalForm();
+        String sheet = MainWindow.HIGH_CONTRAST;
+        assertTrue(MainWindow.class.getClassLoader().getResource(sheet) != null, "packaged");
         FormHarness.fx(() -> window.preferences().set(window.preferences().get().withHighContrast(true)));
         assertTrue(window.stage().getScene().getStylesheets().contains(sheet));
         FormHarness.fx(() -> window.preferences().set(window.preferences().get().withHighContrast(false)));
