@@ -210,7 +210,8 @@ public final class FlowEstimator {
         if (!apheresis.bloodVolumeL().isKnown()) {
             String reason = "not estimated: the mixing needs the blood volume, and "
                     + apheresis.bloodVolumeL().whyUnknown().orElseThrow();
-            return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason));
+            return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason),
+                    WhatIf.Changes.MAIN_SERIES);
         }
         double tbv = apheresis.bloodVolumeL().known().orElseThrow();
         double after = transfusedHematocrit(h, tbv, units, unitVolume, unitRedCells);
@@ -225,7 +226,7 @@ public final class FlowEstimator {
                         + "the cautious side).");
         return new WhatIf(id, name, assumptions,
                 Estimate.known(inVitroSeries(after, ratio, referenceH)),
-                leukocritSeriesFor(after, ratio, referenceH, cell, wbc));
+                leukocritSeriesFor(after, ratio, referenceH, cell, wbc), WhatIf.Changes.MAIN_SERIES);
     }
 
     /**
@@ -251,7 +252,8 @@ public final class FlowEstimator {
             String reason = "not estimated: the projection needs a measured serum viscosity and a paraprotein "
                     + "isotype (" + sv.whyUnknown().or(() -> apheresis.intravascularFraction().whyUnknown())
                     .orElseThrow() + ")";
-            return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason));
+            return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason),
+                    WhatIf.Changes.MAIN_SERIES);
         }
         double f = apheresis.intravascularFraction().known().orElseThrow();
         double r = ExchangeKinetics.paraproteinRemaining(f, v);
@@ -269,7 +271,7 @@ public final class FlowEstimator {
                         + "fractions unchanged).");
         return new WhatIf(id, name, assumptions,
                 Estimate.known(inVitroSeries(h, ratio, referenceH)),
-                leukocritSeriesFor(h, ratio, referenceH, cell, wbc));
+                leukocritSeriesFor(h, ratio, referenceH, cell, wbc), WhatIf.Changes.MAIN_SERIES);
     }
 
     /** "1.0 plasma volume", "1.5 plasma volumes": the size of an exchange in words. */
@@ -294,6 +296,6 @@ public final class FlowEstimator {
         assumptions.add("Red cells and plasma are returned, so only the leukocrit series changes; the main "
                 + "series is the same as now.");
         return new WhatIf(id, name, assumptions, Estimate.known(byDiameter),
-                leukocritSeriesFor(h, ratio, referenceH, cell, lowered));
+                leukocritSeriesFor(h, ratio, referenceH, cell, lowered), WhatIf.Changes.LEUKOCRIT_ONLY);
     }
 }

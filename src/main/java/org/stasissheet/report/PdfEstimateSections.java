@@ -1,5 +1,7 @@
 package org.stasissheet.report;
 
+import org.stasissheet.flow.FlowSources;
+import org.stasissheet.apheresis.ApheresisSources;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Paragraph;
@@ -51,9 +53,9 @@ final class PdfEstimateSections {
             caveats(pdf, doc, flow.caveats());
             return;
         }
-        int poiseuille = pdf.sources().cite(EstimateSources.POISEUILLE);
-        int vitro = pdf.sources().cite(EstimateSources.PRIES_1992);
-        int vivo = pdf.sources().cite(EstimateSources.PRIES_1994);
+        int poiseuille = pdf.sources().cite(FlowSources.POISEUILLE);
+        int vitro = pdf.sources().cite(FlowSources.PRIES_1992);
+        int vivo = pdf.sources().cite(FlowSources.PRIES_1994);
         doc.add(pdf.loose(pdf.text("Flow through a vessel at the same pressure, patient ÷ reference [" + poiseuille + "]; "
                 + "apparent viscosity = plasma ratio × blood viscosity law [" + vitro + "], [" + vivo + "]. "
                 + "Hematocrit used " + flow.hematocrit().known().map(h -> Numbers.rounded(h, 3)).orElse("—")
@@ -80,13 +82,14 @@ final class PdfEstimateSections {
         flow.inVivo().known().ifPresent(p -> list.add(named("patient, in vivo law (Pries 1994)", p)));
         Optional<Leukocrit> lk = flow.leukocrit().known();
         if (lk.isPresent()) {
-            pdf.sources().cite(EstimateSources.LICHTMAN_ROWE);
+            pdf.sources().cite(FlowSources.LICHTMAN_ROWE);
             list.add(named("patient with leukocrit " + Numbers.rounded(lk.get().leukocrit(), 2) + " ("
                     + lk.get().cellType() + " " + Numbers.plain(lk.get().meanCellVolumeFl()) + " fL)",
                     lk.get().byDiameter()));
         }
         for (WhatIf w : flow.whatIf()) {
-            w.byDiameter().known().ifPresent(p -> list.add(named("what-if: " + w.name(), p)));
+            String suffix = w.changes() == WhatIf.Changes.LEUKOCRIT_ONLY ? " (with leukocrit)" : "";
+            w.movedSeries().known().ifPresent(p -> list.add(named("what-if: " + w.name() + suffix, p)));
         }
         return list;
     }
@@ -94,7 +97,7 @@ final class PdfEstimateSections {
     private static int seriesCount(FlowEstimates flow) {
         int n = (flow.byDiameter().isKnown() ? 1 : 0) + (flow.inVivo().isKnown() ? 1 : 0)
                 + (flow.leukocrit().isKnown() ? 1 : 0);
-        return n + (int) flow.whatIf().stream().filter(w -> w.byDiameter().isKnown()).count();
+        return n + (int) flow.whatIf().stream().filter(w -> w.movedSeries().isKnown()).count();
     }
 
     private static NamedSeries named(String label, List<FlowPoint> points) {
@@ -158,8 +161,8 @@ final class PdfEstimateSections {
     static void apheresis(WorksheetPdf pdf, Document doc) throws DocumentException {
         ApheresisPlan plan = pdf.sheet().apheresis();
         doc.add(pdf.heading("Apheresis planning"));
-        int nadler = pdf.sources().cite(EstimateSources.NADLER);
-        int kaplan = pdf.sources().cite(EstimateSources.KAPLAN);
+        int nadler = pdf.sources().cite(ApheresisSources.NADLER);
+        int kaplan = pdf.sources().cite(ApheresisSources.KAPLAN);
         PdfPTable v = pdf.table(3.2f, 4f);
         v.setHeaderRows(0);
         row(pdf, v, "Total blood volume (Nadler) [" + nadler + "]", litres(plan.bloodVolumeL()));
@@ -170,8 +173,8 @@ final class PdfEstimateSections {
                 x -> Numbers.rounded(x * 100, 3) + " %"));
         doc.add(v);
 
-        int kinetics = pdf.sources().cite(EstimateSources.ONE_COMPARTMENT);
-        int projection = pdf.sources().cite(EstimateSources.SV_PROJECTION);
+        int kinetics = pdf.sources().cite(ApheresisSources.ONE_COMPARTMENT);
+        int projection = pdf.sources().cite(ApheresisSources.SV_PROJECTION);
         Paragraph head = pdf.subheading("Plasma exchange [" + kinetics + "]", pdf.bodyBold(), 4);
         doc.add(head);
         PdfPTable t = pdf.table(1.3f, 1.4f, 2f, 2f, 2.4f);
@@ -192,7 +195,7 @@ final class PdfEstimateSections {
             doc.add(pdf.text("— " + sentence(reason), pdf.small()));
         }
 
-        int leuka = pdf.sources().cite(EstimateSources.LEUKAPHERESIS);
+        int leuka = pdf.sources().cite(ApheresisSources.LEUKAPHERESIS);
         PdfPTable l = pdf.table(3.2f, 4f);
         l.setHeaderRows(0);
         row(pdf, l, "Leukapheresis: blood volume to process [" + leuka + "]",

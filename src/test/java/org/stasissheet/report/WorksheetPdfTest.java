@@ -200,7 +200,7 @@ class WorksheetPdfTest {
                     assertTrue(text.contains(expected), "missing: " + expected);
                 }
                 for (WhatIf w : sheet.flow().whatIf()) {
-                    if (w.byDiameter().isKnown()) {
+                    if (w.movedSeries().isKnown()) {
                         assertTrue(text.contains("what-if: " + w.name()), "legend lacks " + w.name());
                     }
                 }

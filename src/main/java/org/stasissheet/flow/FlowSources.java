@@ -1,0 +1,22 @@
+package org.stasissheet.flow;
+
+/**
+ * The published laws and figures behind the flow estimates. Citations as in the team's domain reference (DOMAIN.md §4–5), with its basis tags; every renderer
+ * cites these, none writes its own.
+ */
+public final class FlowSources {
+    private FlowSources() {
+    }
+
+    public static final String POISEUILLE = "Poiseuille's law: at fixed pressure and geometry flow varies as "
+            + "reference viscosity ÷ patient viscosity [published]";
+
+    public static final String PRIES_1992 = "Pries AR, Neuhaus D, Gaehtgens P, Am J Physiol 1992;263:H1770–H1778 "
+            + "(in vitro blood viscosity law) [published]";
+
+    public static final String PRIES_1994 = "Pries AR et al., Circ Res 1994;75:904–915 (in vivo viscosity law with the "
+            + "endothelial surface layer) [published]";
+
+    public static final String LICHTMAN_ROWE = "Lichtman MA, Rowe JM, Blood 1982;60(2):279–283 (leukocrit); mean cell "
+            + "volumes from memory [from memory]";
+}
