@@ -1,0 +1,35 @@
+package org.stasissheet.ui;
+
+import java.time.Clock;
+import javafx.application.Application;
+import javafx.stage.Stage;
+import org.stasissheet.ui.app.CaseSession;
+import org.stasissheet.ui.app.DataFolder;
+import org.stasissheet.ui.app.FormSettings;
+import org.stasissheet.ui.app.FxShell;
+import org.stasissheet.ui.app.MainWindow;
+import org.stasissheet.ui.app.RuleLoading;
+import org.stasissheet.ui.draft.Autosaver;
+
+/**
+ * The desktop form's JavaFX application. {@link org.stasissheet.Main} calls {@link #open} by name when started
+ * without arguments, so the command line never loads JavaFX.
+ */
+public final class FormApp extends Application {
+    /** Starts the toolkit and opens the form window; returns when the last window has closed. */
+    public static void open(String[] args) {
+        Application.launch(FormApp.class, args);
+    }
+
+    /** The settings of a real session: the user's data folder, the desktop's dialogs, the system clock. */
+    public static FormSettings userSettings() {
+        return new FormSettings(DataFolder.resolve(), FxShell::new, Clock.systemDefaultZone(),
+                Autosaver.DEFAULT_DELAY, CaseSession.DEFAULT_RECOMPUTE_DELAY, RuleLoading::load,
+                FormSettings.DEFAULT_SAMPLE);
+    }
+
+    @Override
+    public void start(Stage stage) {
+        MainWindow.open(stage, userSettings());
+    }
+}

@@ -1,0 +1,440 @@
+package org.stasissheet.ui.app;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.OffsetDateTime;
+import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.TimeUnit;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleObjectProperty;
+import org.stasissheet.cli.InvalidInputException;
+import org.stasissheet.cli.ToolVersion;
+import org.stasissheet.files.WorksheetPdfs;
+import org.stasissheet.intake.CaseReader;
+import org.stasissheet.report.HandoffNote;
+import org.stasissheet.report.PdfOptions;
+import org.stasissheet.report.WorksheetPdf;
+import org.stasissheet.rules.RuleSet;
+import org.stasissheet.ui.draft.Autosaver;
+import org.stasissheet.ui.draft.DraftStore;
+import org.stasissheet.ui.entry.FormJson;
+import org.stasissheet.ui.entry.FormState;
+import org.stasissheet.worksheet.Worksheet;
+
+/**
+ * The commands of the window (new, open, save, export, copy the note, rule folder, close), each the same from
+ * the menu, its shortcut and a test. File work runs on the {@link Background} thread; the form itself is only
+ * touched on the JavaFX thread. Nothing typed is replaced without asking first.
+ */
+public final class Actions {
+    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss");
+
+    private final CaseSession session;
+    private final Shell shell;
+    private final Background background;
+    private final DraftStore drafts;
+    private final Autosaver autosaver;
+    private final PreferencesStore preferenceStore;
+    private final ObjectProperty<Preferences> preferences;
+    private final java.util.function.Function<Optional<Path>, RuleSet> ruleLoader;
+    private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
+    private final ObjectProperty<Optional<Path>> ruleFolder = new SimpleObjectProperty<>(this, "ruleFolder",
+            Optional.empty());
+    private final Clock clock;
+    private final ZoneId zone;
+
+    Actions(CaseSession session, Shell shell, Background background, DraftStore drafts, Autosaver autosaver,
+            PreferencesStore preferenceStore, ObjectProperty<Preferences> preferences,
+            java.util.function.Function<Optional<Path>, RuleSet> ruleLoader, Clock clock) {
+        this.session = Objects.requireNonNull(session, "session");
+        this.shell = Objects.requireNonNull(shell, "shell");
+        this.background = Objects.requireNonNull(background, "background");
+        this.drafts = Objects.requireNonNull(drafts, "drafts");
+        this.autosaver = Objects.requireNonNull(autosaver, "autosaver");
+        this.preferenceStore = Objects.requireNonNull(preferenceStore, "preferenceStore");
+        this.preferences = Objects.requireNonNull(preferences, "preferences");
+        this.ruleLoader = Objects.requireNonNull(ruleLoader, "ruleLoader");
+        this.clock = Objects.requireNonNull(clock, "clock");
+        this.zone = clock.getZone();
+        ruleFolder.set(preferences.get().ruleFolder());
+    }
+
+    /** What the last command did, in words, for the status bar. */
+    public ReadOnlyStringProperty statusProperty() {
+        return status.getReadOnlyProperty();
+    }
+
+    /** The folder of the local protocol in use, empty for the shipped rule set. */
+    public ObjectProperty<Optional<Path>> ruleFolderProperty() {
+        return ruleFolder;
+    }
+
+    /** The file name people see for the form's case. */
+    public String documentName() {
+        return session.documentProperty().get().map(p -> p.getFileName().toString()).orElse("the unsaved case");
+    }
+
+    /** Asks before unsaved changes would be lost; false when the user cancelled (or a save was not made). */
+    boolean mayReplace() {
+        if (!session.dirtyProperty().get()) {
+            return true;
+        }
+        return switch (shell.askUnsaved(documentName())) {
+            case SAVE -> saveAndWait();
+            case DISCARD -> true;
+            case CANCEL -> false;
+        };
+    }
+
+    public void newCase() {
+        if (!mayReplace()) {
+            return;
+        }
+        session.load(FormJson.blank(preferences.get().units()), Optional.empty());
+        markRunning();
+        status.set("New case");
+    }
+
+    /** Opens a packaged demo case (not tied to any file: Save asks where). */
+    public void openSample(String name) {
+        if (!mayReplace()) {
+            return;
+        }
+        Optional<FormState> state = Samples.read(name).flatMap(b -> FormJson.read(b, preferences.get().units()));
+        if (state.isEmpty()) {
+            shell.showProblems("The demo case could not be opened", List.of(name + " is not in this build."));
+            return;
+        }
+        session.load(state.get(), Optional.empty());
+        markRunning();
+        status.set("Demo case " + name + " (invented data; Save asks where to keep it)");
+    }
+
+    public void open() {
+        if (!mayReplace()) {
+            return;
+        }
+        Optional<Path> near = session.documentProperty().get().or(() -> preferences.get().recentFiles().stream()
+                .findFirst());
+        shell.chooseCaseToOpen(near).ifPresent(this::openFile);
+    }
+
+    /** Opens a case JSON or a worksheet PDF, without asking about unsaved changes (callers have asked). */
+    public void openFile(Path file) {
+        status.set("Opening " + file.getFileName() + "…");
+        boolean pdfByName = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
+        background.run(() -> CaseOpening.read(file, pdfByName), opened -> {
+            boolean pdf = pdfByName || opened.fromPdf();
+            if (opened.problems().isEmpty()) {
+                Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
+                if (state.isPresent()) {
+                    // A case read out of a PDF belongs to no case file: Save asks where.
+                    session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
+                    remember(file);
+                    markRunning();
+                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : ""));
+                    return;
+                }
+            }
+            List<String> lines = new ArrayList<>(opened.problems());
+            if (lines.isEmpty()) {
+                CaseReader.Result r = CaseReader.read(opened.caseJson());
+                if (r instanceof CaseReader.Rejected rejected) {
+                    rejected.problems().forEach(p -> lines.add(p.toString()));
+                } else {
+                    lines.add("the file is not a JSON object");
+                }
+            }
+            status.set("Not opened: " + file.getFileName());
+            shell.showProblems(file.getFileName() + " was not opened; the form is unchanged", lines);
+        }, e -> {
+            status.set("Not opened: " + file.getFileName());
+            shell.showProblems(file.getFileName() + " was not opened", List.of(oneLine(e)));
+        });
+    }
+
+    public void openRecent(Path file) {
+        if (mayReplace()) {
+            openFile(file);
+        }
+    }
+
+    public void save() {
+        Optional<Path> doc = session.documentProperty().get();
+        if (doc.isPresent()) {
+            write(doc.get(), () -> { });
+        } else {
+            saveAs();
+        }
+    }
+
+    public void saveAs() {
+        chooseTarget().ifPresent(p -> write(p, () -> { }));
+    }
+
+    /** Saves and waits for the write (before closing or replacing); false when nothing was saved. */
+    boolean saveAndWait() {
+        Optional<Path> target = session.documentProperty().get().or(this::chooseTarget);
+        if (target.isEmpty()) {
+            return false;
+        }
+        byte[] json = session.caseJson();
+        try {
+            Storage.writeDocument(target.get(), json); // the user is waiting for this one write before closing
+            afterSave(target.get(), json);
+            return true;
+        } catch (IOException e) {
+            shell.showProblems("The case was not saved", List.of(oneLine(e)));
+            return false;
+        }
+    }
+
+    private Optional<Path> chooseTarget() {
+        String suggested = session.entry().field("patient.label").textProperty().get()
+                .replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "");
+        return shell.chooseCaseTarget((suggested.isEmpty() ? "case" : suggested) + ".json",
+                session.documentProperty().get()).map(p -> withExtension(p, ".json"));
+    }
+
+    private void write(Path target, Runnable then) {
+        byte[] json = session.caseJson();
+        status.set("Saving " + target.getFileName() + "…");
+        background.run(() -> {
+            Storage.writeDocument(target, json);
+            return target;
+        }, saved -> {
+            afterSave(saved, json);
+            then.run();
+        }, e -> {
+            status.set("NOT saved: " + oneLine(e));
+            shell.showProblems("The case was not saved", List.of(oneLine(e)));
+        });
+    }
+
+    private void afterSave(Path saved, byte[] json) {
+        session.saved(saved, json);
+        remember(saved);
+        markRunning();
+        autosaver.forget();
+        background.run(() -> {
+            drafts.discardDraft(); // the file holds it now
+            return saved;
+        }, d -> { }, e -> { });
+        int problems = countProblems();
+        status.set("Saved " + saved.getFileName() + (problems == 0 ? ""
+                : " with " + problems + " PROBLEM(S): the command line will refuse the file until they are fixed"));
+    }
+
+    private int countProblems() {
+        return CaseReader.read(session.caseJson()) instanceof CaseReader.Rejected r ? r.problems().size() : 0;
+    }
+
+    /**
+     * Writes the worksheet PDF of the complete case (with the case file embedded, so the PDF can be opened again).
+     * Rendering and writing run on the background thread; the form stays usable meanwhile.
+     */
+    public void exportPdf() {
+        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (sheet.isEmpty()) {
+            shell.showProblems("No PDF: the case has problems", List.of(
+                    "Fix the entries marked PROBLEM first: a PDF is only made of a complete case."));
+            return;
+        }
+        String base = session.documentProperty().get().map(p -> p.getFileName().toString().replaceFirst(
+                "\\.json$", "")).orElse("worksheet");
+        Optional<Path> target = shell.choosePdfTarget(base + ".pdf", session.documentProperty().get())
+                .map(p -> withExtension(p, ".pdf"));
+        if (target.isEmpty()) {
+            return;
+        }
+        byte[] json = session.caseJson();
+        OffsetDateTime now = OffsetDateTime.now(clock);
+        Worksheet ws = sheet.get();
+        status.set("Writing " + target.get().getFileName() + "…");
+        background.run(() -> {
+            byte[] pdf = WorksheetPdf.render(ws, PdfOptions.defaults(ToolVersion.get()), now, json);
+            Storage.writeDocument(target.get(), pdf);
+            return target.get();
+        }, written -> status.set("PDF written: " + written), e -> {
+            status.set("PDF NOT written: " + oneLine(e));
+            shell.showProblems("The PDF was not written", List.of(oneLine(e)));
+        });
+    }
+
+    /** Puts the handoff note of the complete case on the clipboard (without the patient label). */
+    public void copyHandoffNote() {
+        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (sheet.isEmpty()) {
+            shell.showProblems("No handoff note: the case has problems", List.of(
+                    "Fix the entries marked PROBLEM first: a note is only written for a complete case."));
+            return;
+        }
+        shell.copyToClipboard(HandoffNote.render(sheet.get(), false));
+        status.set("Handoff note copied to the clipboard (no patient label in it)");
+    }
+
+    /** Loads the rule set of a folder the user picks; a refused set changes nothing and lists every problem. */
+    public void chooseRuleFolder() {
+        shell.chooseRuleFolder(ruleFolder.get()).ifPresent(this::useRuleFolder);
+    }
+
+    public void useRuleFolder(Path folder) {
+        loadRules(Optional.of(folder));
+    }
+
+    public void useShippedRules() {
+        loadRules(Optional.empty());
+    }
+
+    private void loadRules(Optional<Path> folder) {
+        status.set("Loading rules " + folder.map(Path::toString).orElse("(shipped)") + "…");
+        background.run(() -> ruleLoader.apply(folder), rules -> {
+            session.ruleSetProperty().set(rules);
+            ruleFolder.set(folder);
+            updatePreferences(preferences.get().withRuleFolder(folder));
+            status.set("Rules: " + rules.provenance().name() + " " + rules.provenance().version()
+                    + (rules.provenance().local() ? " (LOCAL PROTOCOL)" : ""));
+        }, e -> {
+            List<String> lines = e instanceof InvalidInputException bad ? bad.lines() : List.of(oneLine(e));
+            status.set("Rules not changed");
+            shell.showProblems("The rule set was refused; the rules in use are unchanged", lines);
+        });
+    }
+
+    void updatePreferences(Preferences p) {
+        preferences.set(p);
+        background.run(() -> {
+            preferenceStore.save(p);
+            return p;
+        }, saved -> { }, e -> status.set("Preferences not saved: " + oneLine(e)));
+    }
+
+    private void remember(Path file) {
+        updatePreferences(preferences.get().withRecent(file));
+    }
+
+    /** Records (in the session marker) which file the form belongs to, so a restored draft knows it. */
+    void markRunning() {
+        Optional<Path> doc = session.documentProperty().get();
+        background.run(() -> {
+            drafts.markRunning(doc);
+            return doc;
+        }, d -> { }, e -> status.set("Session marker not written: " + oneLine(e)));
+    }
+
+    /** Offers a draft left by a session that did not end cleanly; true when it was restored. */
+    boolean offerDraft() {
+        Optional<DraftStore.Draft> draft = drafts.crashedDraft();
+        if (draft.isEmpty()) {
+            return false;
+        }
+        DraftStore.Draft d = draft.get();
+        String detail = "A draft saved at " + WHEN.format(d.savedAt().atZone(zone))
+                + d.document().map(p -> " for " + p.getFileName()).orElse(" (never saved to a file)") + " was found.";
+        Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
+        if (state.isPresent() && shell.offerRestore(detail)) {
+            session.restore(state.get(), d.document());
+            status.set("Draft restored: check it, then save");
+            return true;
+        }
+        try {
+            drafts.discardDraft();
+        } catch (IOException e) {
+            status.set("Old draft not removed: " + oneLine(e));
+        }
+        return false;
+    }
+
+    /**
+     * The window is asked to close. Unsaved changes are asked about; when closing goes ahead, pending writes
+     * finish and the session ends cleanly (no draft is offered next time).
+     *
+     * @return true when the window may close
+     */
+    public boolean closeRequested() {
+        if (!mayReplace()) {
+            return false;
+        }
+        autosaver.cancel();
+        background.drain(10, TimeUnit.SECONDS);
+        try {
+            drafts.endCleanly();
+        } catch (IOException e) {
+            // the next start offers the draft once more, which loses nothing
+        }
+        return true;
+    }
+
+    static Path withExtension(Path p, String ext) {
+        String name = p.getFileName().toString();
+        return name.toLowerCase(Locale.ROOT).endsWith(ext) ? p : p.resolveSibling(name + ext);
+    }
+
+    static String oneLine(Exception e) {
+        String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        return m.replaceAll("\\s*\\R\\s*", " ").trim();
+    }
+
+    /** What opening a file gave: the case as JSON bytes, or why not. */
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf) {
+        Opened {
+            Objects.requireNonNull(caseJson, "caseJson");
+            problems = List.copyOf(problems);
+        }
+
+        Opened(byte[] caseJson, List<String> problems) {
+            this(caseJson, problems, false);
+        }
+    }
+
+    /** The file reads of {@link #openFile}, on the background thread. */
+    static final class CaseOpening {
+        /** The largest worksheet PDF read (the command line's limit too): 32 MiB. */
+        static final long MAX_PDF_BYTES = 32L << 20;
+
+        private CaseOpening() {
+        }
+
+        /** The case JSON of a case file, or of the case embedded in a worksheet PDF (by name or {@code %PDF}). */
+        static Opened read(Path file, boolean pdfByName) throws IOException {
+            if (Files.isDirectory(file)) {
+                return new Opened(new byte[0], List.of(file.getFileName() + " is a folder, not a case file"));
+            }
+            long size = Files.size(file);
+            if (size > MAX_PDF_BYTES || (!pdfByName && size > CaseReader.MAX_BYTES && !startsAsPdf(file))) {
+                return new Opened(new byte[0], List.of(file.getFileName() + ": " + size
+                        + " bytes is larger than a case file can be (" + CaseReader.MAX_BYTES + " bytes)"));
+            }
+            byte[] bytes = Files.readAllBytes(file);
+            if (WorksheetPdfs.looksLikePdf(file, bytes)) {
+                try {
+                    return new Opened(WorksheetPdfs.extractCase(bytes), List.of(), true);
+                } catch (IOException e) {
+                    return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
+                }
+            }
+            return new Opened(bytes, List.of());
+        }
+
+        private static boolean startsAsPdf(Path file) throws IOException {
+            try (var in = Files.newInputStream(file)) {
+                return WorksheetPdfs.startsWithPdfMagic(in.readNBytes(4));
+            }
+        }
+    }
+
+    static String text(byte[] b) {
+        return new String(b, StandardCharsets.UTF_8);
+    }
+}

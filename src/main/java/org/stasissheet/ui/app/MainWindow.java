@@ -1,0 +1,282 @@
+package org.stasissheet.ui.app;
+
+import java.nio.file.Path;
+import java.time.OffsetDateTime;
+import java.time.format.DateTimeFormatter;
+import java.time.temporal.ChronoUnit;
+import java.util.Objects;
+import java.util.Optional;
+import javafx.beans.binding.Bindings;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.geometry.Orientation;
+import javafx.scene.Scene;
+import javafx.scene.control.CheckMenuItem;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.RadioMenuItem;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+import javafx.stage.Stage;
+import org.stasissheet.ui.draft.Autosaver;
+import org.stasissheet.ui.draft.DraftStore;
+import org.stasissheet.ui.entry.EntryView;
+import org.stasissheet.ui.entry.EntryViewModel;
+import org.stasissheet.ui.entry.FormJson;
+import org.stasissheet.ui.entry.UnitSystem;
+import org.stasissheet.ui.sheet.SheetView;
+import org.stasissheet.worksheet.Cautions;
+
+/**
+ * The form's window: menu bar, the standing caution (always visible, outside the scrolling areas), entry side
+ * and worksheet side, and a status bar. It wires views, view-models and {@link Actions} together and computes
+ * nothing itself.
+ */
+public final class MainWindow {
+    /** Class-path style sheets (JavaFX resolves a scheme-less name through the class loader). */
+    public static final String STYLESHEET = "org/stasissheet/ui/form.css";
+    public static final String HIGH_CONTRAST = "org/stasissheet/ui/high-contrast.css";
+
+    private final Stage stage;
+    private final CaseSession session;
+    private final Actions actions;
+    private final Autosaver autosaver;
+    private final Background background;
+    private final ObjectProperty<Preferences> preferences;
+    private final BorderPane root = new BorderPane();
+
+    private MainWindow(Stage stage, FormSettings settings) {
+        this.stage = Objects.requireNonNull(stage, "stage");
+        PreferencesStore preferenceStore = new PreferencesStore(settings.dataFolder());
+        preferences = new SimpleObjectProperty<>(this, "preferences", preferenceStore.load());
+        DraftStore drafts = new DraftStore(settings.dataFolder());
+        background = new Background();
+        Shell shell = settings.shell().apply(stage);
+
+        EntryViewModel entry = new EntryViewModel(preferences.get().units());
+        RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
+        session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
+        autosaver = new Autosaver(drafts, background, entry.editsProperty(), session::caseJson,
+                settings.autosaveDelay(), settings.clock());
+        actions = new Actions(session, shell, background, drafts, autosaver, preferenceStore, preferences,
+                settings.rules(), settings.clock());
+        actions.ruleFolderProperty().set(first.folder());
+        entry.unitSystemProperty().bind(Bindings.createObjectBinding(() -> preferences.get().units(), preferences));
+
+        EntryView entryView = new EntryView(entry, () -> OffsetDateTime.now(settings.clock())
+                .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
+        SheetView sheetView = new SheetView(session.sheet());
+        SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
+        sides.setOrientation(Orientation.HORIZONTAL);
+        sides.setDividerPositions(0.42);
+
+        Label caution = new Label("CAUTION: " + Cautions.SHORT);
+        caution.setId("standing-caution");
+        caution.getStyleClass().add("standing-caution");
+        caution.setWrapText(true);
+        caution.setMaxWidth(Double.MAX_VALUE);
+        root.setTop(new VBox(menus(), caution));
+        root.setCenter(sides);
+        root.setBottom(statusBar());
+        root.getStyleClass().add("form-root");
+
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(root, Math.min(1280, screen.getWidth()), Math.min(860, screen.getHeight()));
+        scene.getStylesheets().add(STYLESHEET);
+        preferences.addListener((o, was, now) -> applyLook(scene, now));
+        applyLook(scene, preferences.get());
+        stage.setScene(scene);
+        stage.titleProperty().bind(Bindings.createStringBinding(() -> "Stasis Sheet — "
+                        + session.documentProperty().get().map(p -> p.getFileName().toString()).orElse("case not saved to a file")
+                        + (session.dirtyProperty().get() ? " • unsaved changes" : ""),
+                session.documentProperty(), session.dirtyProperty()));
+        stage.setOnCloseRequest(e -> {
+            if (!actions.closeRequested()) {
+                e.consume();
+            } else {
+                background.close();
+            }
+        });
+        first.problem().ifPresent(lines -> shell.showProblems(
+                "The local rule set was refused; the shipped rule set is in use", lines));
+    }
+
+    /**
+     * Builds the window on {@code stage}, shows it, then offers a crashed session's draft or opens the demo case.
+     */
+    public static MainWindow open(Stage stage, FormSettings settings) {
+        MainWindow w = new MainWindow(stage, settings);
+        stage.setMinWidth(Math.min(900, javafx.stage.Screen.getPrimary().getVisualBounds().getWidth()));
+        stage.setMinHeight(Math.min(600, javafx.stage.Screen.getPrimary().getVisualBounds().getHeight()));
+        stage.show();
+        if (!w.actions.offerDraft()) {
+            w.session.load(Samples.read(settings.demoSample())
+                    .flatMap(b -> FormJson.read(b, w.preferences.get().units()))
+                    .orElse(FormJson.blank(w.preferences.get().units())), Optional.empty());
+        }
+        w.actions.markRunning();
+        return w;
+    }
+
+    public CaseSession session() {
+        return session;
+    }
+
+    public Actions actions() {
+        return actions;
+    }
+
+    public Autosaver autosaver() {
+        return autosaver;
+    }
+
+    public Background background() {
+        return background;
+    }
+
+    public ObjectProperty<Preferences> preferences() {
+        return preferences;
+    }
+
+    public Stage stage() {
+        return stage;
+    }
+
+    private static void applyLook(Scene scene, Preferences p) {
+        scene.getStylesheets().remove(HIGH_CONTRAST);
+        if (p.highContrast()) {
+            scene.getStylesheets().add(HIGH_CONTRAST);
+        }
+        // Text scales from the system font size: every size in the style sheets is in em of this one.
+        scene.getRoot().setStyle("-fx-font-size: " + (javafx.scene.text.Font.getDefault().getSize() * p.textScale())
+                + "px;");
+    }
+
+    private MenuBar menus() {
+        Menu file = new Menu("_Case");
+        file.setId("menu-case");
+        MenuItem newCase = item("_New case", "Shortcut+N", "action-new", actions::newCase);
+        MenuItem open = item("_Open case or worksheet PDF…", "Shortcut+O", "action-open", actions::open);
+        Menu recent = new Menu("Open _recent");
+        recent.setId("menu-recent");
+        recent.setOnShowing(e -> fillRecent(recent));
+        fillRecent(recent);
+        preferences.addListener((o, was, now) -> fillRecent(recent));
+        Menu samples = new Menu("Open a _demo case");
+        for (String name : Samples.NAMES) {
+            samples.getItems().add(item(name, null, "sample-" + name.replace(".json", ""),
+                    () -> actions.openSample(name)));
+        }
+        MenuItem save = item("_Save", "Shortcut+S", "action-save", actions::save);
+        MenuItem saveAs = item("Save _as…", "Shortcut+Shift+S", "action-save-as", actions::saveAs);
+        MenuItem quit = item("_Close window", "Shortcut+Q", "action-close", () -> {
+            if (actions.closeRequested()) {
+                background.close();
+                stage.close();
+            }
+        });
+        file.getItems().addAll(newCase, open, recent, samples, new SeparatorMenuItem(), save, saveAs,
+                new SeparatorMenuItem(), quit);
+
+        Menu sheet = new Menu("_Worksheet");
+        MenuItem export = item("_Export PDF…", "Shortcut+E", "action-export", actions::exportPdf);
+        MenuItem note = item("Copy the _handoff note", "Shortcut+Shift+C", "action-copy-note",
+                actions::copyHandoffNote);
+        // Only a complete case makes a PDF or a note; the menu says why when it is not.
+        for (MenuItem m : java.util.List.of(export, note)) {
+            m.disableProperty().bind(Bindings.createBooleanBinding(
+                    () -> session.completeWorksheetProperty().get().isEmpty(), session.completeWorksheetProperty()));
+        }
+        MenuItem why = new MenuItem("(fix the entries marked PROBLEM to export)");
+        why.setDisable(true);
+        why.visibleProperty().bind(export.disableProperty());
+        sheet.getItems().addAll(export, note, why);
+
+        Menu rules = new Menu("_Rules");
+        MenuItem folder = item("Use a _local rule folder…", "Shortcut+L", "action-rule-folder",
+                actions::chooseRuleFolder);
+        MenuItem shipped = item("Use the _shipped rules", null, "action-shipped-rules", actions::useShippedRules);
+        shipped.disableProperty().bind(Bindings.createBooleanBinding(() -> actions.ruleFolderProperty().get().isEmpty(),
+                actions.ruleFolderProperty()));
+        rules.getItems().addAll(folder, shipped);
+
+        Menu view = new Menu("_Settings");
+        ToggleGroup units = new ToggleGroup();
+        for (UnitSystem u : UnitSystem.values()) {
+            RadioMenuItem r = new RadioMenuItem("New entries in " + u.label());
+            r.setId("units-" + u.name().toLowerCase(java.util.Locale.ROOT));
+            r.setToggleGroup(units);
+            r.setSelected(preferences.get().units() == u);
+            r.setOnAction(e -> actions.updatePreferences(preferences.get().withUnits(u)));
+            view.getItems().add(r);
+        }
+        CheckMenuItem contrast = new CheckMenuItem("_High contrast");
+        contrast.setId("high-contrast");
+        contrast.setAccelerator(KeyCombination.keyCombination("Shortcut+Shift+H"));
+        contrast.setSelected(preferences.get().highContrast());
+        contrast.setOnAction(e -> actions.updatePreferences(preferences.get().withHighContrast(contrast.isSelected())));
+        MenuItem larger = item("_Larger text", "Shortcut+EQUALS", "text-larger",
+                () -> actions.updatePreferences(preferences.get().withTextScale(preferences.get().textScale() + 0.1)));
+        MenuItem smaller = item("S_maller text", "Shortcut+MINUS", "text-smaller",
+                () -> actions.updatePreferences(preferences.get().withTextScale(preferences.get().textScale() - 0.1)));
+        MenuItem normal = item("System text size", "Shortcut+DIGIT0", "text-normal",
+                () -> actions.updatePreferences(preferences.get().withTextScale(1)));
+        view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal);
+
+        MenuBar bar = new MenuBar(file, sheet, rules, view);
+        bar.setId("menu-bar");
+        return bar;
+    }
+
+    private void fillRecent(Menu recent) {
+        recent.getItems().clear();
+        for (Path p : preferences.get().recentFiles()) {
+            MenuItem i = new MenuItem(p.getFileName() + "  —  " + p.toAbsolutePath().getParent());
+            i.setMnemonicParsing(false);
+            i.setOnAction(e -> actions.openRecent(p));
+            recent.getItems().add(i);
+        }
+        if (recent.getItems().isEmpty()) {
+            MenuItem none = new MenuItem("(none yet)");
+            none.setDisable(true);
+            recent.getItems().add(none);
+        }
+    }
+
+    private static MenuItem item(String text, String accelerator, String id, Runnable action) {
+        MenuItem i = new MenuItem(text);
+        i.setId(id);
+        if (accelerator != null) {
+            i.setAccelerator(KeyCombination.keyCombination(accelerator));
+        }
+        i.setOnAction(e -> action.run());
+        return i;
+    }
+
+    private HBox statusBar() {
+        Label saved = new Label();
+        saved.setId("autosave-status");
+        saved.textProperty().bind(autosaver.statusProperty());
+        Label dirty = new Label();
+        dirty.setId("dirty-status");
+        dirty.textProperty().bind(Bindings.when(session.dirtyProperty()).then("UNSAVED CHANGES")
+                .otherwise("saved"));
+        Label message = new Label();
+        message.setId("action-status");
+        message.textProperty().bind(actions.statusProperty());
+        Region gap = new Region();
+        HBox.setHgrow(gap, Priority.ALWAYS);
+        HBox bar = new HBox(14, message, gap, saved, dirty);
+        bar.getStyleClass().add("status-bar");
+        return bar;
+    }
+}

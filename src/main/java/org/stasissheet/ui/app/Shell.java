@@ -1,0 +1,44 @@
+package org.stasissheet.ui.app;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Everything the form asks of the desktop around its window: questions, file pickers, the clipboard. The real
+ * one ({@link FxShell}) shows dialogs; tests hand in their own answers, so every path through a question can be
+ * checked headless.
+ */
+public interface Shell {
+    /** What to do with unsaved changes. */
+    enum UnsavedChoice { SAVE, DISCARD, CANCEL }
+
+    /**
+     * A draft from a session that did not end cleanly was found.
+     *
+     * @param detail when it was saved and which file it belonged to, in words
+     * @return true to restore it, false to throw it away
+     */
+    boolean offerRestore(String detail);
+
+    /** The form has changes that are not in a file; asked before they would be replaced or closed. */
+    UnsavedChoice askUnsaved(String documentName);
+
+    /** A case file (JSON) or a worksheet PDF to open. */
+    Optional<Path> chooseCaseToOpen(Optional<Path> near);
+
+    /** Where to save the case JSON. */
+    Optional<Path> chooseCaseTarget(String suggestedName, Optional<Path> near);
+
+    /** Where to write the worksheet PDF. */
+    Optional<Path> choosePdfTarget(String suggestedName, Optional<Path> near);
+
+    /** A folder holding a local rule set. */
+    Optional<Path> chooseRuleFolder(Optional<Path> near);
+
+    /** Tells the user that something could not be done and why, one line per reason. */
+    void showProblems(String title, List<String> lines);
+
+    /** Puts text on the system clipboard. */
+    void copyToClipboard(String text);
+}

@@ -1,0 +1,129 @@
+package org.stasissheet.ui.chart;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import javafx.beans.value.ObservableValue;
+import javafx.scene.Node;
+import javafx.scene.chart.LineChart;
+import javafx.scene.chart.NumberAxis;
+import javafx.scene.chart.XYChart;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.Label;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.VBox;
+import org.stasissheet.flow.FlowPoint;
+import org.stasissheet.measure.Numbers;
+
+/**
+ * The flow chart: relative flow (patient ÷ reference blood) against vessel diameter on a log axis, the reference
+ * level 1 as a line of its own, one toggle per series (what-ifs start off), and under it why any series is
+ * missing, the notes and the caveats. Series differ by dash pattern and marker shape as well as colour
+ * (see the style sheet), and the chart's accessible text reads out the patient's values.
+ */
+public final class FlowChartView {
+    static final double MIN_DIAMETER_UM = 4;
+    static final double MAX_DIAMETER_UM = 1000;
+    static final List<Double> SPOKEN_DIAMETERS = List.of(5.0, 10.0, 20.0, 50.0, 100.0);
+
+    private final LineChart<Number, Number> chart;
+    private final FlowPane toggles = new FlowPane(10, 4);
+    private final VBox notes = new VBox(2);
+    private final VBox assumptions = new VBox(2);
+    private final VBox root;
+    private final Map<String, Boolean> shown = new LinkedHashMap<>();
+    /** Held here: a binding passed in is otherwise only weakly reachable and would stop updating. */
+    private final ObservableValue<FlowChartModel> model;
+
+    public FlowChartView(ObservableValue<FlowChartModel> model) {
+        this.model = Objects.requireNonNull(model, "model");
+        LogAxis x = new LogAxis("vessel diameter (µm, log scale)", MIN_DIAMETER_UM, MAX_DIAMETER_UM);
+        NumberAxis y = new NumberAxis();
+        y.setLabel("relative flow (1 = reference)");
+        y.setForceZeroInRange(true);
+        chart = new LineChart<>(x, y);
+        chart.setId("flow-chart");
+        chart.setAnimated(false);
+        chart.setCreateSymbols(true);
+        chart.setLegendVisible(true);
+        chart.getStyleClass().add("flow-chart");
+        chart.setMinHeight(260);
+        chart.setPrefHeight(320);
+        toggles.setId("flow-toggles");
+        toggles.getStyleClass().add("flow-toggles");
+        notes.getStyleClass().add("flow-notes");
+        Label title = new Label("Microvascular flow: an illustration, not a measurement");
+        title.getStyleClass().add("sheet-heading");
+        assumptions.setId("what-if-assumptions");
+        root = new VBox(6, title, toggles, chart, assumptions, notes);
+        root.getStyleClass().add("flow-section");
+        root.setId("flow-section");
+        model.addListener((o, was, now) -> show(now));
+        show(model.getValue());
+    }
+
+    public Node node() {
+        return root;
+    }
+
+    private void show(FlowChartModel m) {
+        toggles.getChildren().clear();
+        for (FlowSeries s : m.series()) {
+            boolean on = shown.getOrDefault(s.id(), s.shownAtStart());
+            CheckBox box = new CheckBox(s.name());
+            box.setId("series-" + s.id());
+            box.setSelected(on);
+            box.setAccessibleText("Show the series " + s.name());
+            box.selectedProperty().addListener((o, was, now) -> {
+                shown.put(s.id(), now);
+                plot(m);
+            });
+            toggles.getChildren().add(box);
+        }
+        notes.getChildren().clear();
+        m.missing().forEach(t -> notes.getChildren().add(note("not shown: " + t, "flow-missing")));
+        m.notes().forEach(t -> notes.getChildren().add(note(t, "flow-note")));
+        m.caveats().forEach(t -> notes.getChildren().add(note("CAVEAT: " + t, "flow-caveat")));
+        plot(m);
+    }
+
+    private void plot(FlowChartModel m) {
+        chart.getData().clear();
+        assumptions.getChildren().clear();
+        StringBuilder spoken = new StringBuilder("Flow chart. ");
+        if (!m.series().isEmpty()) {
+            XYChart.Series<Number, Number> reference = new XYChart.Series<>();
+            reference.setName("Reference blood (1)");
+            reference.getData().add(new XYChart.Data<>(MIN_DIAMETER_UM, 1));
+            reference.getData().add(new XYChart.Data<>(MAX_DIAMETER_UM, 1));
+            chart.getData().add(reference);
+        }
+        for (FlowSeries s : m.series()) {
+            if (!shown.getOrDefault(s.id(), s.shownAtStart())) {
+                continue;
+            }
+            s.assumptions().forEach(a -> assumptions.getChildren().add(note(s.name() + ": " + a, "flow-assumption")));
+            XYChart.Series<Number, Number> series = new XYChart.Series<>();
+            series.setName(s.name());
+            spoken.append(s.name()).append(':');
+            for (FlowPoint p : s.points()) {
+                series.getData().add(new XYChart.Data<>(p.diameterUm(), p.relativeFlow()));
+                if (SPOKEN_DIAMETERS.contains(p.diameterUm())) {
+                    spoken.append(' ').append(Numbers.plain(p.diameterUm())).append(" µm ")
+                            .append(Numbers.rounded(p.relativeFlow(), 2)).append(',');
+                }
+            }
+            spoken.append(". ");
+            chart.getData().add(series);
+        }
+        chart.setAccessibleText(m.series().isEmpty() ? "Flow chart: no estimate" : spoken.toString());
+    }
+
+    private static Label note(String text, String style) {
+        Label l = new Label(text);
+        l.setWrapText(true);
+        l.getStyleClass().add(style);
+        return l;
+    }
+}

@@ -1,0 +1,19 @@
+package org.stasissheet.ui.entry;
+
+import org.stasissheet.rules.LeukostasisVerdict;
+
+/**
+ * The short descriptor beside each organ grade: the rule package's own words
+ * ({@link LeukostasisVerdict#DESCRIPTORS}, basis from memory), so the form, the PDF and the rules say the same.
+ */
+final class GradeWords {
+    static final String HINT = "0 none · 1 slight · 2 marked · 3 severe; the wording of each grade is from memory ("
+            + LeukostasisVerdict.COMBINATION_RULE + ")";
+
+    private GradeWords() {
+    }
+
+    static String descriptor(LeukostasisVerdict.Organ organ, int grade) {
+        return LeukostasisVerdict.descriptor(organ, grade);
+    }
+}

@@ -1,0 +1,252 @@
+package org.stasissheet.ui.sheet;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.Optional;
+import org.stasissheet.apheresis.ApheresisPlan;
+import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.apheresis.ValueRange;
+import org.stasissheet.flow.FlowEstimates;
+import org.stasissheet.flow.FlowPoint;
+import org.stasissheet.flow.Leukocrit;
+import org.stasissheet.flow.WhatIf;
+import org.stasissheet.measure.Analyte;
+import org.stasissheet.measure.Estimate;
+import org.stasissheet.measure.Numbers;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
+import org.stasissheet.rules.LeukostasisVerdict;
+import org.stasissheet.rules.Level;
+import org.stasissheet.rules.Provenance;
+import org.stasissheet.rules.TumorLysisVerdict;
+import org.stasissheet.ui.chart.FlowChartModel;
+import org.stasissheet.ui.chart.FlowSeries;
+import org.stasissheet.worksheet.InputLine;
+import org.stasissheet.worksheet.Worksheet;
+
+/**
+ * What the worksheet side shows, ready to lay out: a pure, toolkit-free rendering of a {@link Worksheet} into
+ * rows of text. It presents and never recomputes: every number comes from the worksheet.
+ *
+ * @param leftOut  the fields the worksheet was computed without (their messages are beside them)
+ * @param blocking reader messages when not even a partial worksheet could be made
+ */
+public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, List<String> blocking,
+                           String ruleSetBadge, boolean localProtocol, List<VerdictCard> verdicts,
+                           List<FlagGroup> flagGroups, FlowChartModel flow, List<Row> volumes,
+                           List<ExchangeLine> exchanges, List<Row> leukapheresis, List<String> apheresisNotes,
+                           List<Row> inputs) {
+    public static final SheetContent EMPTY = new SheetContent(Optional.empty(), List.of(), List.of(), "", false,
+            List.of(), List.of(), FlowChartModel.EMPTY, List.of(), List.of(), List.of(), List.of(), List.of());
+
+    public SheetContent {
+        Objects.requireNonNull(worksheet, "worksheet");
+        leftOut = List.copyOf(leftOut);
+        blocking = List.copyOf(blocking);
+        Objects.requireNonNull(ruleSetBadge, "ruleSetBadge");
+        verdicts = List.copyOf(verdicts);
+        flagGroups = List.copyOf(flagGroups);
+        Objects.requireNonNull(flow, "flow");
+        volumes = List.copyOf(volumes);
+        exchanges = List.copyOf(exchanges);
+        leukapheresis = List.copyOf(leukapheresis);
+        apheresisNotes = List.copyOf(apheresisNotes);
+        inputs = List.copyOf(inputs);
+    }
+
+    /** A verdict as a card: its title, the verdict word in capitals, and the lines explaining it. */
+    public record VerdictCard(String id, String title, String word, boolean raised, List<String> lines) {
+        public VerdictCard {
+            Objects.requireNonNull(id, "id");
+            Objects.requireNonNull(title, "title");
+            Objects.requireNonNull(word, "word");
+            lines = List.copyOf(lines);
+        }
+    }
+
+    /** The flags of one level, in worksheet order. */
+    public record FlagGroup(Level level, List<Flag> flags) {
+        public FlagGroup {
+            Objects.requireNonNull(level, "level");
+            flags = List.copyOf(flags);
+        }
+
+        /** "[!!!] ACT NOW · 2 flags". */
+        public String heading() {
+            return level.badge() + " · " + flags.size() + (flags.size() == 1 ? " flag" : " flags");
+        }
+    }
+
+    /** A labelled value, or the reason there is none. */
+    public record Row(String label, String value) {
+        public Row {
+            Objects.requireNonNull(label, "label");
+            Objects.requireNonNull(value, "value");
+        }
+    }
+
+    /** One row of the exchange table. */
+    public record ExchangeLine(String plasmaVolumes, String volume, String intravascularLeft, String paraproteinAfter,
+                               String viscosityAfter) {
+        public ExchangeLine {
+            Objects.requireNonNull(plasmaVolumes, "plasmaVolumes");
+            Objects.requireNonNull(volume, "volume");
+            Objects.requireNonNull(intravascularLeft, "intravascularLeft");
+            Objects.requireNonNull(paraproteinAfter, "paraproteinAfter");
+            Objects.requireNonNull(viscosityAfter, "viscosityAfter");
+        }
+    }
+
+    public static SheetContent nothing(List<String> blocking) {
+        return new SheetContent(Optional.empty(), List.of(), blocking, "", false, List.of(), List.of(),
+                FlowChartModel.EMPTY, List.of(), List.of(), List.of(), List.of(), List.of());
+    }
+
+    public static SheetContent of(Worksheet ws, List<String> leftOut) {
+        Provenance p = ws.ruleSet();
+        String badge = "Rule set " + p.name() + " " + p.version() + " · sha256 " + p.shortHash() + "…";
+        ApheresisPlan plan = ws.apheresis();
+        return new SheetContent(Optional.of(ws), leftOut, List.of(), badge, p.local(), verdicts(ws), flagGroups(ws),
+                flow(ws.flow()), volumes(plan), exchanges(plan), leukapheresis(plan), plan.notes(), inputs(ws));
+    }
+
+    static List<VerdictCard> verdicts(Worksheet ws) {
+        HyperviscosityVerdict hv = ws.hyperviscosity();
+        List<String> hvLines = new ArrayList<>();
+        hvLines.add(hv.reason());
+        hvLines.add("Rests on: " + words(hv.route().code()));
+        if (!hv.unassessed().isEmpty()) {
+            hvLines.add("Not assessed, counted as absent: " + String.join(", ", hv.unassessed()));
+        }
+        boolean hvRaised = hv.assessment() == HyperviscosityVerdict.Assessment.LIKELY
+                || hv.assessment() == HyperviscosityVerdict.Assessment.POSSIBLE;
+
+        LeukostasisVerdict lk = ws.leukostasis();
+        String lkWord = upper(words(lk.probability().code())) + lk.score().map(s -> " (score " + s + " of 3)").orElse("");
+        boolean lkRaised = lk.score().map(s -> s >= 1).orElse(false);
+
+        TumorLysisVerdict tl = ws.tumorLysis();
+        String tlWord = "LABORATORY " + yesNo(tl.laboratory()) + "\nCLINICAL " + yesNo(tl.clinical());
+        List<String> tlLines = new ArrayList<>();
+        tlLines.add(tl.reason());
+        for (TumorLysisVerdict.Criterion c : tl.criteria()) {
+            tlLines.add((c.met() ? "MET: " : "not met: ") + c.analyte().label()
+                    + c.value().map(q -> " " + Numbers.rounded(q.value(), 4) + " " + q.unit()).orElse("") + " · " + c.how());
+        }
+        tlLines.add(tl.window());
+        boolean tlRaised = tl.laboratory().orElse(false);
+        return List.of(
+                new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(words(hv.assessment().code())),
+                        hvRaised, hvLines),
+                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", lkWord, lkRaised, List.of(lk.reason())),
+                new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", tlWord, tlRaised, tlLines));
+    }
+
+    static List<FlagGroup> flagGroups(Worksheet ws) {
+        List<FlagGroup> groups = new ArrayList<>();
+        for (Level level : Level.values()) {
+            List<Flag> flags = ws.flags().stream().filter(f -> f.level() == level).toList();
+            if (!flags.isEmpty()) {
+                groups.add(new FlagGroup(level, flags));
+            }
+        }
+        return groups;
+    }
+
+    static FlowChartModel flow(FlowEstimates f) {
+        List<FlowSeries> series = new ArrayList<>();
+        List<String> missing = new ArrayList<>();
+        add(series, missing, "in-vitro", "Patient, Pries 1992 in vitro law", true, f.byDiameter(), List.of());
+        add(series, missing, "in-vivo", "Patient, Pries 1994 in vivo law", true, f.inVivo(), List.of());
+        add(series, missing, "leukocrit", "Patient with leukocrit added (approximation)", true,
+                f.leukocrit().map(Leukocrit::byDiameter), List.of());
+        for (WhatIf w : f.whatIf()) {
+            add(series, missing, "what-if-" + w.id(), "What if: " + w.name(), false, w.byDiameter(),
+                    w.assumptions());
+        }
+        List<String> notes = new ArrayList<>();
+        notes.add("Relative flow = reference blood ÷ patient (hematocrit " + Numbers.plain(f.referenceHematocrit())
+                + ", serum viscosity " + Numbers.plain(f.referenceSerumViscosity())
+                + ") at the same pressure and vessel size; 1 means as in the reference blood.");
+        notes.add("Plasma ratio: " + f.plasmaRatioBasis());
+        f.leukocrit().known().ifPresent(l -> notes.add("Leukocrit " + Numbers.rounded(l.leukocrit(), 3) + " = WBC "
+                + Numbers.rounded(l.wbc(), 3) + " ×10⁹/L × " + Numbers.plain(l.meanCellVolumeFl()) + " fL ("
+                + l.cellType() + ", from memory); it only ever lowers the estimate."));
+        return new FlowChartModel(series, missing, notes, f.caveats());
+    }
+
+    private static void add(List<FlowSeries> series, List<String> missing, String id, String name, boolean shown,
+                            Estimate<List<FlowPoint>> points, List<String> assumptions) {
+        points.known().ifPresentOrElse(p -> series.add(new FlowSeries(id, name, p, shown, assumptions)),
+                () -> missing.add(name + ": " + points.whyUnknown().orElseThrow()));
+    }
+
+    static List<Row> volumes(ApheresisPlan plan) {
+        return List.of(
+                new Row("Total blood volume (Nadler)", value(plan.bloodVolumeL(), " L")),
+                new Row("Plasma volume (Kaplan)", value(plan.plasmaVolumeL(), " L")),
+                new Row("Plasma volume, blood volume × (1 − Hct)", value(plan.plasmaVolumeFromBloodVolumeL(), " L")),
+                new Row("Paraprotein", value(plan.paraproteinGPerL(), " g/L")),
+                new Row("Intravascular fraction of the paraprotein",
+                        plan.intravascularFraction().known().map(v -> Numbers.rounded(100 * v, 3) + " %")
+                                .orElseGet(() -> plan.intravascularFraction().whyUnknown().orElseThrow())));
+    }
+
+    static List<ExchangeLine> exchanges(ApheresisPlan plan) {
+        List<ExchangeLine> lines = new ArrayList<>();
+        for (ExchangeRow r : plan.exchanges()) {
+            lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), value(r.volumeL(), " L"),
+                    Numbers.rounded(100 * r.intravascularRemaining(), 3) + " %",
+                    value(r.paraproteinAfterGPerL(), " g/L"), value(r.serumViscosityAfter(), "")));
+        }
+        return lines;
+    }
+
+    static List<Row> leukapheresis(ApheresisPlan plan) {
+        return List.of(
+                new Row("Blood to process per leukapheresis", range(plan.leukapheresis().processVolumeL(), " L")),
+                new Row("White count after one procedure", range(plan.leukapheresis().wbcAfter(), " ×10⁹/L")));
+    }
+
+    static List<Row> inputs(Worksheet ws) {
+        List<Row> rows = new ArrayList<>();
+        for (InputLine line : ws.inputs()) {
+            Optional<Analyte> analyte = Analyte.byKey(line.path().substring(line.path().lastIndexOf('.') + 1));
+            String entered = Numbers.rounded(line.entered().value(), 4) + " " + shownUnit(analyte, line.entered().unit());
+            String canonical = Numbers.rounded(line.canonical().value(), 4) + " "
+                    + shownUnit(analyte, line.canonical().unit());
+            rows.add(new Row(line.label() + " (" + line.path() + ")",
+                    line.entered().equals(line.canonical()) ? entered : entered + "  =  " + canonical));
+        }
+        return rows;
+    }
+
+    /** The unit as clinicians write it (×10⁹/L, µmol/L), falling back to the UCUM code. */
+    private static String shownUnit(Optional<Analyte> analyte, String ucum) {
+        return analyte.flatMap(a -> a.unitOption(ucum)).map(u -> u.display()).orElse(ucum);
+    }
+
+    private static String value(Estimate<Double> e, String unit) {
+        return e.known().map(v -> Numbers.rounded(v, 3) + unit)
+                .orElseGet(() -> "not estimated: " + e.whyUnknown().orElseThrow());
+    }
+
+    private static String range(Estimate<ValueRange> e, String unit) {
+        return e.known().map(r -> Numbers.rounded(r.low(), 3) + "–" + Numbers.rounded(r.high(), 3) + unit)
+                .orElseGet(() -> "not estimated: " + e.whyUnknown().orElseThrow());
+    }
+
+    private static String yesNo(Optional<Boolean> b) {
+        return b.map(v -> v ? "YES" : "NO").orElse("UNDECIDED");
+    }
+
+    private static String words(String code) {
+        return code.replace('-', ' ');
+    }
+
+    private static String upper(String s) {
+        return s.toUpperCase(Locale.ROOT);
+    }
+}

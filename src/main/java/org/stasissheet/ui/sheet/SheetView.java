@@ -1,0 +1,244 @@
+package org.stasissheet.ui.sheet;
+
+import java.util.List;
+import java.util.Objects;
+import javafx.beans.binding.Bindings;
+import javafx.css.PseudoClass;
+import javafx.scene.Node;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import org.stasissheet.rules.Basis;
+import org.stasissheet.rules.Flag;
+import org.stasissheet.ui.chart.FlowChartModel;
+import org.stasissheet.ui.chart.FlowChartView;
+import org.stasissheet.worksheet.Cautions;
+
+/**
+ * The worksheet side: rule-set badge, notices, the three verdicts, the flags grouped by level (each one
+ * expands to its explanation, source and basis), the flow chart, the apheresis numbers, the inputs as read, and
+ * the standing cautions. It lays out {@link SheetContent} and computes nothing.
+ */
+public final class SheetView {
+    private static final PseudoClass RAISED = PseudoClass.getPseudoClass("raised");
+
+    private final VBox body = new VBox(10);
+    private final ScrollPane root = new ScrollPane(body);
+    private final Label badge = new Label();
+    private final Label local = new Label("LOCAL PROTOCOL: this rule set differs from the shipped one");
+    private final Label leftOut = new Label();
+    private final Label blocking = new Label();
+    private final FlowPane verdicts = new FlowPane(10, 10);
+    private final VBox flags = new VBox(6);
+    private final VBox apheresis = new VBox(6);
+    private final GridPane inputs = new GridPane();
+    /** Held so the chart (and the binding feeding it) lives as long as this view. */
+    private final FlowChartView chart;
+
+    public SheetView(SheetViewModel model) {
+        Objects.requireNonNull(model, "model");
+        root.setFitToWidth(true);
+        root.getStyleClass().add("sheet-side");
+        root.setAccessibleText("Worksheet");
+        body.getStyleClass().add("sheet-body");
+        body.setMinWidth(0);
+        verdicts.prefWrapLengthProperty().bind(root.widthProperty().subtract(40));
+        badge.setId("rule-set-badge");
+        badge.getStyleClass().add("rule-set-badge");
+        local.setId("local-protocol");
+        local.getStyleClass().addAll("notice", "notice-local");
+        leftOut.setId("left-out-notice");
+        leftOut.getStyleClass().addAll("notice", "notice-incomplete");
+        blocking.setId("no-worksheet");
+        blocking.getStyleClass().addAll("notice", "notice-blocking");
+        for (Label l : List.of(local, leftOut, blocking)) {
+            l.setWrapText(true);
+            l.managedProperty().bind(l.visibleProperty());
+        }
+        verdicts.setId("verdicts");
+        flags.setId("flags");
+        inputs.getStyleClass().add("sheet-grid");
+        chart = new FlowChartView(Bindings.createObjectBinding(
+                () -> model.content().flow(), model.contentProperty()));
+        HBox badgeRow = new HBox(8, badge);
+        body.getChildren().addAll(badgeRow, local, leftOut, blocking,
+                heading("Verdicts"), verdicts,
+                heading("Flags"), flags,
+                chart.node(),
+                heading("Apheresis planning numbers"), apheresis,
+                heading("Inputs as read (entered = canonical unit)"), inputs,
+                cautions());
+        model.contentProperty().addListener((o, was, now) -> show(now));
+        show(model.content());
+    }
+
+    public Node node() {
+        return root;
+    }
+
+    private void show(SheetContent c) {
+        badge.setText(c.ruleSetBadge());
+        local.setVisible(c.localProtocol());
+        leftOut.setVisible(!c.leftOut().isEmpty());
+        leftOut.setText("INCOMPLETE: this worksheet leaves out " + String.join(", ", c.leftOut())
+                + ". Fix the entries marked PROBLEM to include them.");
+        blocking.setVisible(c.worksheet().isEmpty());
+        blocking.setText(c.blocking().isEmpty() ? "NO WORKSHEET yet."
+                : "NO WORKSHEET: the case cannot be read.\n" + String.join("\n", c.blocking()));
+        verdicts.getChildren().setAll(c.verdicts().stream().map(SheetView::verdict).toList());
+        showFlags(c);
+        showApheresis(c);
+        inputs.getChildren().clear();
+        int row = 0;
+        for (SheetContent.Row r : c.inputs()) {
+            inputs.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
+        }
+    }
+
+    private static Node verdict(SheetContent.VerdictCard v) {
+        Label title = new Label(v.title());
+        title.getStyleClass().add("verdict-title");
+        Label word = new Label((v.raised() ? "▲ " : "· ") + v.word());
+        word.setWrapText(true);
+        word.setId("verdict-" + v.id() + "-word");
+        word.getStyleClass().add("verdict-word");
+        VBox card = new VBox(4, title, word);
+        for (String line : v.lines()) {
+            Label l = new Label(line);
+            l.setWrapText(true);
+            l.getStyleClass().add("verdict-line");
+            card.getChildren().add(l);
+        }
+        card.setId("verdict-" + v.id());
+        card.getStyleClass().add("verdict-card");
+        card.pseudoClassStateChanged(RAISED, v.raised());
+        card.setAccessibleText(v.title() + ": " + v.word());
+        card.setFocusTraversable(false);
+        return card;
+    }
+
+    private void showFlags(SheetContent c) {
+        flags.getChildren().clear();
+        if (c.worksheet().isPresent() && c.flagGroups().isEmpty()) {
+            flags.getChildren().add(cell("No rule fired. This does not rule anything out.", "flag-none"));
+        }
+        for (SheetContent.FlagGroup g : c.flagGroups()) {
+            Label head = new Label(g.heading());
+            head.getStyleClass().addAll("flag-group-heading", "level-" + g.level().code());
+            head.setId("flag-group-" + g.level().code());
+            VBox group = new VBox(2, head);
+            group.getStyleClass().addAll("flag-group", "level-" + g.level().code());
+            for (Flag f : g.flags()) {
+                Label explanation = new Label(f.explanation());
+                explanation.setWrapText(true);
+                Label source = new Label("Source: " + f.source());
+                source.setWrapText(true);
+                Label basis = new Label("Basis: " + basisWords(f.basis()) + "   ·   rule " + f.id());
+                basis.getStyleClass().add("flag-basis");
+                VBox detail = new VBox(3, explanation, source, basis);
+                // A wrapping title and a details toggle instead of a titled pane: nothing is cut off.
+                Label title = new Label("[" + g.level().symbol() + "] " + g.level().word() + ": " + f.title());
+                title.setWrapText(true);
+                title.getStyleClass().add("flag-title");
+                javafx.scene.control.ToggleButton more = new javafx.scene.control.ToggleButton("source and basis");
+                more.setId("flag-" + f.id().replaceAll("[^A-Za-z0-9_-]", "_") + "-details");
+                more.getStyleClass().add("flag-details-toggle");
+                more.setAccessibleText("Show the explanation, source and basis of: " + f.title());
+                more.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+                detail.visibleProperty().bind(more.selectedProperty());
+                detail.managedProperty().bind(more.selectedProperty());
+                detail.getStyleClass().add("flag-detail");
+                HBox titleRow = new HBox(8, title, more);
+                HBox.setHgrow(title, Priority.ALWAYS);
+                title.setMaxWidth(Double.MAX_VALUE);
+                VBox pane = new VBox(2, titleRow, detail);
+                pane.setId("flag-" + f.id().replaceAll("[^A-Za-z0-9_-]", "_"));
+                pane.getStyleClass().addAll("flag", "level-" + g.level().code());
+                pane.setAccessibleText(g.level().word() + ": " + f.title());
+                group.getChildren().add(pane);
+            }
+            flags.getChildren().add(group);
+        }
+    }
+
+    static String basisWords(Basis b) {
+        return switch (b) {
+            case PUBLISHED -> "published";
+            case PUBLISHED_SECONDARY -> "published, quoted by a later source";
+            case COMMON_PRACTICE -> "common practice (no single source)";
+            case FROM_MEMORY -> "FROM MEMORY, not verified against the source";
+        };
+    }
+
+    private void showApheresis(SheetContent c) {
+        apheresis.getChildren().clear();
+        if (c.worksheet().isEmpty()) {
+            return;
+        }
+        GridPane volumes = grid("apheresis-volumes");
+        int row = 0;
+        for (SheetContent.Row r : c.volumes()) {
+            volumes.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
+        }
+        GridPane exchange = grid("exchange-table");
+        exchange.addRow(0, cell("plasma volumes", "column-head"), cell("volume", "column-head"),
+                cell("intravascular left", "column-head"), cell("paraprotein after", "column-head"),
+                cell("serum viscosity after (projection)", "column-head"));
+        row = 1;
+        for (SheetContent.ExchangeLine e : c.exchanges()) {
+            exchange.addRow(row++, cell(e.plasmaVolumes(), "row-value"), cell(e.volume(), "row-value"),
+                    cell(e.intravascularLeft(), "row-value"), cell(e.paraproteinAfter(), "row-value"),
+                    cell(e.viscosityAfter(), "row-value"));
+        }
+        GridPane leuka = grid("leukapheresis");
+        row = 0;
+        for (SheetContent.Row r : c.leukapheresis()) {
+            leuka.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
+        }
+        apheresis.getChildren().addAll(volumes, subheading("Plasma exchange (one-compartment model)"), exchange,
+                subheading("Leukapheresis"), leuka);
+        c.apheresisNotes().forEach(n -> apheresis.getChildren().add(cell("NOTE: " + n, "apheresis-note")));
+    }
+
+    private static GridPane grid(String id) {
+        GridPane g = new GridPane();
+        g.setId(id);
+        g.getStyleClass().add("sheet-grid");
+        return g;
+    }
+
+    private static Node cautions() {
+        VBox box = new VBox(3);
+        box.setId("standing-cautions");
+        box.getStyleClass().add("standing-cautions");
+        box.getChildren().add(heading("Standing cautions"));
+        for (String c : Cautions.STANDING) {
+            box.getChildren().add(cell("• " + c, "caution-line"));
+        }
+        return box;
+    }
+
+    private static Label heading(String text) {
+        Label l = new Label(text);
+        l.getStyleClass().add("sheet-heading");
+        return l;
+    }
+
+    private static Label subheading(String text) {
+        Label l = new Label(text);
+        l.getStyleClass().add("sheet-subheading");
+        return l;
+    }
+
+    private static Label cell(String text, String style) {
+        Label l = new Label(text);
+        l.setWrapText(true);
+        l.getStyleClass().add(style);
+        HBox.setHgrow(l, Priority.ALWAYS);
+        return l;
+    }
+}

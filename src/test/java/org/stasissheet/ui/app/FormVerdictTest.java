@@ -1,0 +1,147 @@
+package org.stasissheet.ui.app;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Optional;
+import javafx.scene.control.Label;
+import javafx.scene.control.TextField;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.files.CaseFiles;
+import org.stasissheet.intake.CaseReader;
+import org.stasissheet.rules.RuleSet;
+import org.stasissheet.ui.FormHarness;
+import org.stasissheet.ui.ScriptedShell;
+import org.stasissheet.worksheet.Assessor;
+import org.stasissheet.worksheet.Worksheet;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The worksheet side against the core: what the form shows is what {@code assess} says for the same case. */
+@ExtendWith(ApplicationExtension.class)
+class FormVerdictTest {
+    private static final RuleSet SHIPPED = RuleLoading.load(Optional.empty());
+
+    @TempDir
+    Path data;
+
+    final ScriptedShell shell = new ScriptedShell();
+    MainWindow window;
+
+    @Start
+    void start(Stage stage) {
+        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+    }
+
+    private String shown(FxRobot robot, String verdict) {
+        Label word = robot.lookup("#verdict-" + verdict + "-word").query();
+        return word.getText().substring(2); // after the marker: "▲ " raised, "· " not
+    }
+
+    private static String word(String code) {
+        return code.replace('-', ' ').toUpperCase(Locale.ROOT);
+    }
+
+    private static Worksheet assess(byte[] json) {
+        return Assessor.assess(((CaseReader.Accepted) CaseReader.read(json)).c(), SHIPPED);
+    }
+
+    @Test
+    @DisplayName("typing a serum viscosity changes the hyperviscosity verdict to what assess says")
+    void typingViscosity(FxRobot robot) throws Exception {
+        Path sample = Path.of("samples", "igm-symptomatic.json");
+        Worksheet before = Assessor.assess(((CaseReader.Accepted) CaseFiles.read(sample)).c(), SHIPPED);
+        assertTrue(shown(robot, "hyperviscosity").equals(word(before.hyperviscosity().assessment().code())),
+                shown(robot, "hyperviscosity"));
+
+        TextField sv = robot.lookup("#labs-serumViscosity").query();
+        FormHarness.fx(() -> {
+            sv.requestFocus();
+            sv.selectAll();
+        });
+        robot.write("1.5");
+        WaitForAsyncUtils.waitForFxEvents();
+        FormHarness.waitUntil(() -> !shown(robot, "hyperviscosity")
+                .equals(word(before.hyperviscosity().assessment().code())));
+
+        ObjectNode edited = (ObjectNode) new ObjectMapper().readTree(Files.readAllBytes(sample));
+        ((ObjectNode) edited.path("labs").path("serumViscosity")).put("value", 1.5);
+        Worksheet after = assess(new ObjectMapper().writeValueAsBytes(edited));
+        assertNotEquals(before.hyperviscosity().assessment(), after.hyperviscosity().assessment(),
+                "the sample must be one where the viscosity decides");
+        assertTrue(shown(robot, "hyperviscosity").equals(word(after.hyperviscosity().assessment().code())),
+                shown(robot, "hyperviscosity"));
+    }
+
+    @Test
+    @DisplayName("opening each sample shows the same three verdicts and flags as assess")
+    void samplesAsAssess(FxRobot robot) throws Exception {
+        for (String name : Samples.NAMES) {
+            Path file = Path.of("samples", name);
+            FormHarness.fx(() -> window.actions().openFile(file));
+            FormHarness.settle(window);
+            Worksheet expected = Assessor.assess(((CaseReader.Accepted) CaseFiles.read(file)).c(), SHIPPED);
+            assertEquals(Optional.of(file), window.session().documentProperty().get(), name);
+            assertTrue(shown(robot, "hyperviscosity").equals(word(expected.hyperviscosity().assessment().code())),
+                    name + ": " + shown(robot, "hyperviscosity"));
+            assertTrue(shown(robot, "leukostasis").startsWith(word(expected.leukostasis().probability().code())),
+                    name + ": " + shown(robot, "leukostasis"));
+            String tl = shown(robot, "tumor-lysis");
+            assertTrue(tl.contains("LABORATORY " + yesNo(expected.tumorLysis().laboratory())), name + ": " + tl);
+            assertTrue(tl.contains("CLINICAL " + yesNo(expected.tumorLysis().clinical())), name + ": " + tl);
+            Worksheet shownSheet = window.session().completeWorksheetProperty().get().orElseThrow();
+            assertEquals(expected.flags(), shownSheet.flags(), name);
+            for (var flag : expected.flags()) {
+                assertTrue(robot.lookup("#flag-" + flag.id().replaceAll("[^A-Za-z0-9_-]", "_")).tryQuery().isPresent(),
+                        name + ": flag " + flag.id() + " on screen");
+            }
+            assertEquals(false, window.session().dirtyProperty().get(), name + " opens clean");
+        }
+    }
+
+    private static String yesNo(Optional<Boolean> b) {
+        return b.map(v -> v ? "YES" : "NO").orElse("UNDECIDED");
+    }
+
+    @Test
+    @DisplayName("regression: the flow chart keeps following edits after a garbage collection (its binding was collected)")
+    void chartFollowsEdits(FxRobot robot) throws Exception {
+        @SuppressWarnings("unchecked")
+        javafx.scene.chart.LineChart<Number, Number> chart = robot.lookup("#flow-chart").query();
+        double before = chart.getData().get(1).getData().get(0).getYValue().doubleValue();
+        System.gc();
+        FormHarness.fx(() -> {
+            window.session().entry().field("labs.hematocrit").textProperty().set("45");
+            window.session().recomputeNow();
+        });
+        double after = chart.getData().get(1).getData().get(0).getYValue().doubleValue();
+        assertNotEquals(before, after, 1e-9, "a higher hematocrit changes the relative flow");
+        assertEquals(window.session().completeWorksheetProperty().get().orElseThrow().flow().byDiameter().known()
+                .orElseThrow().get(0).relativeFlow(), after, 1e-12, "the chart plots the worksheet's own numbers");
+    }
+
+    @Test
+    @DisplayName("the rule-set badge shows name, version and short hash; the standing caution is always on screen")
+    void badgeAndCaution(FxRobot robot) {
+        Label badge = robot.lookup("#rule-set-badge").query();
+        assertTrue(badge.getText().contains(SHIPPED.provenance().name()), badge.getText());
+        assertTrue(badge.getText().contains(SHIPPED.provenance().shortHash()), badge.getText());
+        Label caution = robot.lookup("#standing-caution").query();
+        assertTrue(caution.getText().contains(org.stasissheet.worksheet.Cautions.SHORT));
+        assertTrue(caution.isVisible());
+        Label local = robot.lookup("#local-protocol").query();
+        assertTrue(!local.isVisible(), "the shipped set is not a local protocol");
+    }
+}
