@@ -21,7 +21,7 @@ import org.stasissheet.rules.RuleSet;
  * Where the commands get their case and rule set from: the one place that turns files into core objects or
  * into an {@link InvalidInputException} naming every problem.
  */
-final class Inputs {
+public final class Inputs {
     /** Largest worksheet PDF read back, in bytes (a worksheet is well under 1 MiB; 32 MiB leaves room). */
     static final int MAX_PDF_BYTES = 32 << 20;
 
@@ -85,7 +85,8 @@ final class Inputs {
     }
 
     /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
-    static RuleSet ruleSet(Optional<Path> dir) {
+    /** The shipped rule set, or the local protocol in {@code dir}; a refused set lists every problem. */
+    public static RuleSet ruleSet(Optional<Path> dir) {
         LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);
         if (result instanceof LoadResult.Refused refused) {
             List<String> lines = new ArrayList<>();

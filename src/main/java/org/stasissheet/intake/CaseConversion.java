@@ -5,13 +5,10 @@ import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.OffsetDateTime;
 import java.time.format.DateTimeParseException;
-import java.util.ArrayList;
 import java.util.EnumMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 import java.util.stream.Collectors;
 import org.stasissheet.intake.CaseDocument.ConditionPart;
 import org.stasissheet.intake.CaseDocument.FindingsPart;
@@ -273,16 +270,10 @@ final class CaseConversion {
      */
     static String implausible(Analyte analyte, double value, UnitOption entered) {
         String head = Numbers.plain(value) + " " + entered.ucum() + " is not plausible";
-        List<String> alternatives = new ArrayList<>();
-        Set<Double> factors = new LinkedHashSet<>();
-        factors.add(entered.toCanonical());
-        for (UnitOption other : analyte.units()) {
-            double canonical = value * other.toCanonical();
-            if (analyte.isPlausible(canonical) && factors.add(other.toCanonical())) {
-                alternatives.add(other.ucum() + " (= " + Numbers.rounded(canonical / entered.toCanonical(), 6)
-                        + " " + entered.ucum() + ")");
-            }
-        }
+        List<String> alternatives = analyte.unitsMakingPlausible(value, entered).stream()
+                .map(other -> other.ucum() + " (= " + Numbers.rounded(value * other.toCanonical()
+                        / entered.toCanonical(), 6) + " " + entered.ucum() + ")")
+                .toList();
         if (!alternatives.isEmpty()) {
             return head + "; did you mean " + String.join(" or ", alternatives) + "?";
         }

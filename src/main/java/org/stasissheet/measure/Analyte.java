@@ -131,6 +131,22 @@ public enum Analyte {
         return canonicalValue >= plausibleMin && canonicalValue <= plausibleMax;
     }
 
+    /**
+     * The other accepted units in which {@code value}, entered in {@code entered}, would be plausible: one per
+     * distinct conversion factor, in picker order. Empty when the value is plausible as entered or no unit fits.
+     * The case reader's "did you mean" and the form's one-click fixes both come from here.
+     */
+    public List<UnitOption> unitsMakingPlausible(double value, UnitOption entered) {
+        if (isPlausible(value * entered.toCanonical())) {
+            return List.of();
+        }
+        java.util.Set<Double> factors = new java.util.HashSet<>();
+        factors.add(entered.toCanonical());
+        return units.stream()
+                .filter(u -> isPlausible(value * u.toCanonical()) && factors.add(u.toCanonical()))
+                .toList();
+    }
+
     /** The body measures under {@code patient}; every other analyte lives under {@code labs}. */
     public boolean isBodyMeasure() {
         return this == HEIGHT || this == WEIGHT;

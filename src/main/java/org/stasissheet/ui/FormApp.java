@@ -8,7 +8,7 @@ import org.stasissheet.ui.app.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.ui.app.RuleLoading;
+import org.stasissheet.cli.Inputs;
 import org.stasissheet.ui.draft.Autosaver;
 
 /**
@@ -24,7 +24,7 @@ public final class FormApp extends Application {
     /** The settings of a real session: the user's data folder, the desktop's dialogs, the system clock. */
     public static FormSettings userSettings() {
         return new FormSettings(DataFolder.resolve(), FxShell::new, Clock.systemDefaultZone(),
-                Autosaver.DEFAULT_DELAY, CaseSession.DEFAULT_RECOMPUTE_DELAY, RuleLoading::load,
+                Autosaver.DEFAULT_DELAY, CaseSession.DEFAULT_RECOMPUTE_DELAY, Inputs::ruleSet,
                 FormSettings.DEFAULT_SAMPLE);
     }
 

@@ -11,7 +11,7 @@ import javafx.application.Platform;
 import javafx.stage.Stage;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.ui.app.RuleLoading;
+import org.stasissheet.cli.Inputs;
 import org.stasissheet.ui.entry.FieldModel;
 
 /**
@@ -33,7 +33,7 @@ public final class EditLatencyBench {
         Path data = Files.createTempDirectory("stasis-bench");
         ScriptedShell shell = new ScriptedShell();
         FormSettings settings = new FormSettings(data, s -> shell, Clock.systemUTC(), Duration.ofSeconds(2),
-                Duration.ofMillis(120), RuleLoading::load, FormSettings.DEFAULT_SAMPLE);
+                Duration.ofMillis(120), Inputs::ruleSet, FormSettings.DEFAULT_SAMPLE);
         CompletableFuture<MainWindow> window = new CompletableFuture<>();
         Platform.runLater(() -> window.complete(MainWindow.open(new Stage(), settings)));
         MainWindow w = window.get(30, TimeUnit.SECONDS);

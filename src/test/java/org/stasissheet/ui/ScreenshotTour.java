@@ -14,7 +14,7 @@ import javafx.scene.control.TitledPane;
 import javafx.stage.Stage;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.ui.app.RuleLoading;
+import org.stasissheet.cli.Inputs;
 
 /**
  * Walks the form through the views shown in the README's screenshots, printing {@code STEP n name} before each
@@ -39,7 +39,7 @@ public final class ScreenshotTour extends Application {
         Path data = Files.createTempDirectory("stasis-tour");
         ScriptedShell shell = new ScriptedShell();
         FormSettings settings = new FormSettings(data, s -> shell, Clock.systemDefaultZone(), Duration.ofSeconds(2),
-                Duration.ofMillis(120), RuleLoading::load, FormSettings.DEFAULT_SAMPLE);
+                Duration.ofMillis(120), Inputs::ruleSet, FormSettings.DEFAULT_SAMPLE);
         MainWindow w = MainWindow.open(stage, settings);
         stage.setX(0);
         stage.setY(0);

@@ -1,12 +1,9 @@
 package org.stasissheet.ui.entry;
 
 import java.math.BigDecimal;
-import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.Set;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyListProperty;
@@ -91,20 +88,10 @@ public final class FieldModel {
             return List.of();
         }
         double value = number.get().doubleValue();
-        if (analyte.get().isPlausible(value * entered.get().toCanonical())) {
-            return List.of();
-        }
-        List<UnitFix> list = new ArrayList<>();
-        Set<Double> factors = new HashSet<>();
-        factors.add(entered.get().toCanonical());
-        for (UnitOption other : analyte.get().units()) {
-            double canonical = value * other.toCanonical();
-            if (analyte.get().isPlausible(canonical) && factors.add(other.toCanonical())) {
-                list.add(new UnitFix(other.ucum(), other.display(),
-                        Numbers.rounded(canonical, 6) + " " + analyte.get().canonicalOption().display()));
-            }
-        }
-        return list;
+        return analyte.get().unitsMakingPlausible(value, entered.get()).stream()
+                .map(other -> new UnitFix(other.ucum(), other.display(), Numbers.rounded(value * other.toCanonical(), 6)
+                        + " " + analyte.get().canonicalOption().display()))
+                .toList();
     }
 
     private static Optional<BigDecimal> number(String s) {

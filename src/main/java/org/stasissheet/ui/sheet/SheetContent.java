@@ -163,7 +163,8 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         add(series, missing, "leukocrit", "Patient with leukocrit added (approximation)", true,
                 f.leukocrit().map(Leukocrit::byDiameter), List.of());
         for (WhatIf w : f.whatIf()) {
-            add(series, missing, "what-if-" + w.id(), "What if: " + w.name(), false, w.byDiameter(),
+            String suffix = w.changes() == WhatIf.Changes.LEUKOCRIT_ONLY ? " (with leukocrit)" : "";
+            add(series, missing, "what-if-" + w.id(), "What if: " + w.name() + suffix, false, w.movedSeries(),
                     w.assumptions());
         }
         List<String> notes = new ArrayList<>();
