@@ -1,8 +1,8 @@
 @echo off
 rem Stasis Sheet launcher (Windows). Runs stasis-sheet.jar, which sits beside this script, with the start-up
-rem options that measured as worth it (src\bench\RESULTS.md): the quick C1 compiler only, the serial collector,
-rem no statistics file, and the class-data archive stasis.jsa when it is present (the JVM's own checks refuse a
-rem stale one quietly). Without arguments the form opens with the JVM's default settings.
+rem options that measured as worth it (src\bench\RESULTS.md): the quick C1 compiler only, the serial collector
+rem and the class-data archive stasis.jsa when it is present (the JVM's own checks refuse a stale one
+rem quietly). Without arguments the form opens with the JVM's default settings.
 rem   stasis --make-archive COMMAND ARGS...   (re)build stasis.jsa by running COMMAND once, e.g.
 rem   stasis --make-archive pdf samples\igm-symptomatic.json -o %TEMP%\training.pdf
 rem JAVA_HOME picks the Java runtime; STASIS_JAVA_OPTS adds JVM options.
