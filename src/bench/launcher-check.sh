@@ -1,0 +1,39 @@
+#!/bin/sh
+# Checks that the launcher never lets a class-data archive break a run: a stale, truncated, garbage or missing
+# archive must give the same output as no archive, with nothing from the JVM on standard output.
+#   mvn -q package -DskipTests && sh src/bench/launcher-check.sh
+# Works on a copy of target/ in a temporary folder (with a space in its name, on purpose).
+set -u
+root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
+work=$(mktemp -d "${TMPDIR:-/tmp}/stasis launcher.XXXXXX") || exit 1
+trap 'rm -rf "$work"' EXIT INT TERM
+cp -R "$root/target/stasis" "$root/target/stasis-sheet.jar" "$root/target/lib" "$work/" || exit 1
+demo=$(ls "$root"/samples/*.json | head -n 1)
+failed=0
+
+check() {  # check NAME: the JSON worksheet must equal the reference, and the run must exit 0
+    out=$("$work/stasis" assess --json "$demo" 2>"$work/err"); code=$?
+    if [ $code -ne 0 ] || [ "$out" != "$reference" ]; then
+        echo "FAIL $1: exit $code"; head -n 3 "$work/err"; failed=1
+    else
+        echo "ok   $1"
+    fi
+}
+
+rm -f "$work/stasis.jsa" "$work/stasis.jsa.size"
+reference=$("$work/stasis" assess --json "$demo") || { echo "FAIL: no reference output"; exit 1; }
+check "no archive"
+"$work/stasis" --make-archive assess "$demo" >/dev/null || { echo "FAIL: --make-archive"; exit 1; }
+check "fresh archive"
+sleep 1; touch "$work/stasis-sheet.jar"
+check "archive older than the jar"
+"$work/stasis" --make-archive assess "$demo" >/dev/null
+# a half-written archive (an interrupted --make-archive by hand): the JVM itself would crash on it
+chmod u+w "$work/stasis.jsa"
+head -c 100000 "$work/stasis.jsa" > "$work/partial" && mv -f "$work/partial" "$work/stasis.jsa"
+check "truncated archive"
+printf 'not an archive at all' > "$work/stasis.jsa"; wc -c < "$work/stasis.jsa" | tr -d ' ' > "$work/stasis.jsa.size"
+check "garbage archive of the recorded size"
+rm -f "$work/stasis.jsa.size"; "$work/stasis" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis.jsa.size"
+check "archive without its size record"
+exit $failed
