@@ -622,7 +622,32 @@ public final class RuleSetLoader {
         }
 
         private void problem(int line, int column, String message) {
-            problems.add(new RuleProblem(file, line, column, message));
+            problems.add(new RuleProblem(file, line, column, abbreviated(message)));
         }
+    }
+
+    /** Longest piece of a file quoted whole in a message; a value may be thousands of characters long. */
+    private static final int QUOTE_CHARS = 60;
+    private static final Pattern LONG_QUOTED = Pattern.compile("\"([^\"]{" + (QUOTE_CHARS + 1) + ",})\"");
+    private static final Pattern LONG_WORD = Pattern.compile("[^\\s\"]{" + (QUOTE_CHARS + 1) + ",}");
+
+    /** A message quotes what the file says, but never pages of it: long pieces keep their start and length. */
+    static String abbreviated(String message) {
+        String shorter = replaceAll(LONG_QUOTED, message, m -> "\"" + shorten(m.group(1)) + "\"");
+        return replaceAll(LONG_WORD, shorter, m -> shorten(m.group()));
+    }
+
+    private static String shorten(String piece) {
+        return piece.substring(0, 40) + "… (" + piece.length() + " characters)";
+    }
+
+    private static String replaceAll(Pattern p, String text, java.util.function.Function<Matcher, String> with) {
+        Matcher m = p.matcher(text);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            m.appendReplacement(out, Matcher.quoteReplacement(with.apply(m)));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 }

@@ -86,7 +86,7 @@ final class YamlTree {
             JsonLocation at = e.getLocation();
             Where where = at == null ? new Where(1, 1) : new Where(Math.max(1, at.getLineNr()),
                     Math.max(1, at.getColumnNr()));
-            throw new Malformed("YAML syntax error: " + firstLine(e.getOriginalMessage()), where);
+            throw new Malformed("YAML syntax error: " + plainWords(firstLine(e.getOriginalMessage())), where);
         } catch (IOException e) {
             throw new Malformed("cannot read YAML: " + firstLine(e.getMessage()), new Where(1, 1));
         }
@@ -164,6 +164,22 @@ final class YamlTree {
 
     private static Where where(JsonLocation at) {
         return new Where(Math.max(1, at.getLineNr()), Math.max(1, at.getColumnNr()));
+    }
+
+    private static final java.util.regex.Pattern PARSER_EVENT =
+            java.util.regex.Pattern.compile("<org\\.yaml\\.snakeyaml\\.events\\.(\\w+?)Event\\([^>]*\\)>");
+
+    /** The parser names what it found by its own class names; a person editing a rule file needs words. */
+    static String plainWords(String message) {
+        return PARSER_EVENT.matcher(message).replaceAll(m -> switch (m.group(1)) {
+            case "MappingStart" -> "the start of a mapping";
+            case "SequenceStart" -> "the start of a list";
+            case "MappingEnd" -> "the end of a mapping";
+            case "SequenceEnd" -> "the end of a list";
+            case "Scalar" -> "a value";
+            case "Alias" -> "an alias";
+            default -> "something else";
+        });
     }
 
     private static String firstLine(String message) {

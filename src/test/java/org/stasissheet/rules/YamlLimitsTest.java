@@ -82,4 +82,26 @@ class YamlLimitsTest {
         assertTrue(key.getMessage().contains("key of " + (YamlTree.MAX_SCALAR_CHARS + 1)), key.getMessage());
         assertEquals(2, key.where.line());
     }
+
+    @Test
+    @DisplayName("the parser's own event class names become words")
+    void parserEvents_becomeWords() {
+        String raw = "Expected a field name (Scalar value in YAML), got this instead: "
+                + "<org.yaml.snakeyaml.events.MappingStartEvent(anchor=null, tag=null, implicit=true)>";
+        assertEquals("Expected a field name (Scalar value in YAML), got this instead: the start of a mapping",
+                YamlTree.plainWords(raw));
+        assertEquals("got a value", YamlTree.plainWords("got <org.yaml.snakeyaml.events.ScalarEvent(x)>"));
+        assertEquals("no event here", YamlTree.plainWords("no event here"));
+    }
+
+    @Test
+    @DisplayName("a message quotes a long value by its start and length, not whole")
+    void longQuotedValues_areAbbreviated() {
+        String value = "9".repeat(5_000);
+        String message = RuleSetLoader.abbreviated("unit \"" + value + "\" is not a unit of uric acid");
+        assertEquals("unit \"" + "9".repeat(40) + "… (5000 characters)\" is not a unit of uric acid", message);
+        assertEquals("was " + "x".repeat(40) + "… (61 characters)", RuleSetLoader.abbreviated("was " + "x".repeat(61)));
+        String sixty = "unit \"" + "y".repeat(60) + "\" is unknown";
+        assertEquals(sixty, RuleSetLoader.abbreviated(sixty));
+    }
 }
