@@ -537,7 +537,13 @@ public final class RuleSetLoader {
                         return Optional.empty();
                     }
                 }
-                t = Threshold.literal(new Quantity(Double.parseDouble(lit.group(1)), unit));
+                double number = Double.parseDouble(lit.group(1));
+                if (!Double.isFinite(number)) {
+                    // 1e999 matches the number pattern but no double holds it
+                    problem(s.where(), "\"" + text + "\" is too large a number for a comparison");
+                    return Optional.empty();
+                }
+                t = Threshold.literal(new Quantity(number, unit));
             } else {
                 Parameter p = parameters.get(text);
                 if (p == null) {

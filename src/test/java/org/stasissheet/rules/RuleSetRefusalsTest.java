@@ -61,6 +61,7 @@ class RuleSetRefusalsTest {
         hyperviscosity.yaml | {field: labs.igm, above: hyperviscosity.igmFlare} | {field: labs.igm, above: 40} | needs a unit for field labs.igm
         hyperviscosity.yaml | {field: labs.igm, above: hyperviscosity.igmFlare} | {field: labs.igm, above: "40 mm[Hg]"} | wrong dimension for labs.igm
         hyperviscosity.yaml | {field: labs.igm, above: hyperviscosity.igmFlare} | {field: labs.igm, above: [40]} | a comparison takes a number with its unit
+        hyperviscosity.yaml | {field: labs.igm, above: hyperviscosity.igmFlare} | {field: labs.igm, above: 1e999 g/L} | too large a number for a comparison
         leukostasis.yaml    |     topic: leukostasis       |     topic: [leukostasis]     | must be a single value
         """)
     void oneEdit_isRefusedWithItsReason(String file, String from, String to, String fragment) {
