@@ -48,10 +48,14 @@ public final class FormHarness {
         WaitForAsyncUtils.waitForFxEvents();
     }
 
-    /** Closes without the close request: what a crash leaves behind (no clean end, draft on disk). */
+    /**
+     * Closes without the close request: what a crash leaves behind (no clean end, draft on disk, and the session
+     * lock let go, as the operating system does for a process that ends).
+     */
     public static void crash(MainWindow w) throws Exception {
         fx(() -> w.stage().hide());
         w.background().close();
+        w.drafts().abandon();
     }
 
     /** Scrolls the enclosing scroll pane so that the node is on screen (before the robot clicks it). */

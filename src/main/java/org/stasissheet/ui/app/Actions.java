@@ -333,27 +333,52 @@ public final class Actions {
         }, d -> { }, e -> status.set("Session marker not written: " + oneLine(e)));
     }
 
-    /** Offers a draft left by a session that did not end cleanly; true when it was restored. */
+    /**
+     * Offers the drafts left by sessions that did not end cleanly, newest first, until one is restored; true when
+     * one was. Declined drafts are thrown away; drafts not yet offered stay for the next start; a draft the form
+     * cannot read back is kept under another name and named in the status bar.
+     */
     boolean offerDraft() {
-        Optional<DraftStore.Draft> draft = drafts.crashedDraft();
-        if (draft.isEmpty()) {
-            return false;
+        List<DraftStore.Draft> found = drafts.crashedDrafts();
+        List<String> notes = new ArrayList<>();
+        boolean restored = false;
+        for (int i = 0; i < found.size() && !restored; i++) {
+            DraftStore.Draft d = found.get(i);
+            Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
+            if (state.isEmpty()) {
+                try {
+                    notes.add("A draft could not be read back; it was kept as " + drafts.setAside(d));
+                } catch (IOException e) {
+                    notes.add("A draft could not be read back and stays where it is: " + oneLine(e));
+                }
+                continue;
+            }
+            String detail = "A draft saved at " + WHEN.format(d.savedAt().atZone(zone))
+                    + d.document().map(p -> " for " + p.getFileName()).orElse(" (never saved to a file)")
+                    + " was found" + (found.size() > 1 ? " (" + (i + 1) + " of " + found.size() + ")." : ".");
+            if (shell.offerRestore(detail)) {
+                session.restore(state.get(), d.document());
+                restored = true;
+                int left = found.size() - i - 1;
+                notes.add(0, "Draft restored: check it, then save" + (left == 0 ? ""
+                        : " (" + left + " more draft" + (left == 1 ? "" : "s") + " will be offered at the next start)"));
+                try {
+                    drafts.adopt(d);
+                } catch (IOException e) {
+                    notes.add("the old draft file stays and will be offered again: " + oneLine(e));
+                }
+            } else {
+                try {
+                    drafts.discard(d);
+                } catch (IOException e) {
+                    notes.add("Old draft not removed: " + oneLine(e));
+                }
+            }
         }
-        DraftStore.Draft d = draft.get();
-        String detail = "A draft saved at " + WHEN.format(d.savedAt().atZone(zone))
-                + d.document().map(p -> " for " + p.getFileName()).orElse(" (never saved to a file)") + " was found.";
-        Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
-        if (state.isPresent() && shell.offerRestore(detail)) {
-            session.restore(state.get(), d.document());
-            status.set("Draft restored: check it, then save");
-            return true;
+        if (!notes.isEmpty()) {
+            status.set(String.join("; ", notes));
         }
-        try {
-            drafts.discardDraft();
-        } catch (IOException e) {
-            status.set("Old draft not removed: " + oneLine(e));
-        }
-        return false;
+        return restored;
     }
 
     /**

@@ -50,6 +50,7 @@ public final class MainWindow {
     private final CaseSession session;
     private final Actions actions;
     private final Autosaver autosaver;
+    private final DraftStore drafts;
     private final Background background;
     private final ObjectProperty<Preferences> preferences;
     private final BorderPane root = new BorderPane();
@@ -58,7 +59,7 @@ public final class MainWindow {
         this.stage = Objects.requireNonNull(stage, "stage");
         PreferencesStore preferenceStore = new PreferencesStore(settings.dataFolder());
         preferences = new SimpleObjectProperty<>(this, "preferences", preferenceStore.load());
-        DraftStore drafts = new DraftStore(settings.dataFolder());
+        drafts = new DraftStore(settings.dataFolder());
         background = new Background();
         Shell shell = settings.shell().apply(stage);
 
@@ -137,6 +138,11 @@ public final class MainWindow {
 
     public Autosaver autosaver() {
         return autosaver;
+    }
+
+    /** This window's draft files (one set per window, so two windows never share a draft). */
+    public DraftStore drafts() {
+        return drafts;
     }
 
     public Background background() {

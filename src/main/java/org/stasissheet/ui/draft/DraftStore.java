@@ -4,85 +4,276 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.UUID;
 import org.stasissheet.ui.app.Storage;
 
 /**
- * The autosaved draft in the user's data folder: {@code draft.json} (the form as case JSON, mistakes and all) and
- * {@code session.json}, a marker written when a session starts and removed when it ends cleanly. A marker found
- * at start-up means the last session did not end cleanly (a crash, a killed process, a power cut), so its draft
- * is offered for restoring. Both files are written atomically and readable by the owner only.
+ * The autosaved drafts in the user's data folder, one set of files per running form, so that two windows open at
+ * once never overwrite or delete each other's draft. A session {@code ID} has:
+ * <ul>
+ *   <li>{@code draft-ID.json}: the form as case JSON, mistakes and all;</li>
+ *   <li>{@code session-ID.json}: which file the form showed, so a restored draft knows its document;</li>
+ *   <li>{@code session-ID.lock}: locked for as long as the session runs. The operating system lets go of the
+ *       lock when the process ends, however it ends, so a draft whose lock can be taken belongs to a session that
+ *       did not end cleanly (a crash, a killed process, a power cut) and is offered for restoring.</li>
+ * </ul>
+ * A clean end deletes the session's files. The draft and marker are written atomically and readable by the owner
+ * only.
  *
- * <p>Blocking file I/O: call from the background executor, except {@link #crashedDraft()} at start-up (two
+ * <p>Blocking file I/O: call from the background executor, except {@link #crashedDrafts()} at start-up (a few
  * small files, read before the window shows).
  */
 public final class DraftStore {
-    static final String DRAFT = "draft.json";
-    static final String MARKER = "session.json";
-    private static final ObjectMapper JSON = new ObjectMapper();
+    static final String DRAFT_PREFIX = "draft-";
+    static final String MARKER_PREFIX = "session-";
+    static final String JSON = ".json";
+    static final String LOCK = ".lock";
+    /** A draft that could not be read back is renamed with this prefix: kept, but not offered again. */
+    static final String SET_ASIDE_PREFIX = "unreadable-";
+    private static final ObjectMapper MAPPER = new ObjectMapper();
 
     private final Path folder;
+    private final String session;
+    private FileChannel lockChannel;
+    private FileLock lock;
 
+    /** A store for a new session in {@code folder}; nothing is written until the session marks itself running. */
     public DraftStore(Path folder) {
+        this(folder, UUID.randomUUID().toString());
+    }
+
+    DraftStore(Path folder, String session) {
         this.folder = Objects.requireNonNull(folder, "folder");
+        this.session = Objects.requireNonNull(session, "session");
     }
 
     public Path folder() {
         return folder;
     }
 
-    /** A draft left by a session that did not end cleanly, if any. */
-    public Optional<Draft> crashedDraft() {
-        Path marker = folder.resolve(MARKER);
-        Path draft = folder.resolve(DRAFT);
-        if (!Files.exists(marker) || !Files.exists(draft)) {
-            return Optional.empty();
+    /** This session's draft file (written by {@link #saveDraft}). */
+    public Path draftFile() {
+        return draftOf(session);
+    }
+
+    /**
+     * Drafts left by sessions that did not end cleanly, newest first. Drafts of forms still open elsewhere are
+     * not among them: their lock is held.
+     */
+    public List<Draft> crashedDrafts() {
+        List<Draft> found = new ArrayList<>();
+        if (!Files.isDirectory(folder)) {
+            return found;
         }
-        try {
-            byte[] json = Files.readAllBytes(draft);
-            Optional<Path> document = Optional.empty();
-            try {
-                JsonNode m = JSON.readTree(Files.readAllBytes(marker));
-                JsonNode doc = m.get("document");
-                if (doc != null && doc.isTextual() && !doc.asText().isBlank()) {
-                    document = Optional.of(Path.of(doc.asText()));
+        try (DirectoryStream<Path> drafts = Files.newDirectoryStream(folder, DRAFT_PREFIX + "*" + JSON)) {
+            for (Path draft : drafts) {
+                String name = draft.getFileName().toString();
+                String id = name.substring(DRAFT_PREFIX.length(), name.length() - JSON.length());
+                if (!id.equals(session) && !running(id)) {
+                    read(id).ifPresent(found::add);
                 }
-            } catch (IOException | RuntimeException unreadableMarker) {
-                // the draft itself is what matters; a damaged marker only loses the file name
             }
-            return Optional.of(new Draft(json, document, Files.getLastModifiedTime(draft).toInstant()));
         } catch (IOException e) {
-            return Optional.empty();
+            return found; // an unlistable folder offers nothing; the files stay where they are
+        }
+        sweepEndedWithoutDraft();
+        found.sort(Comparator.comparing(Draft::savedAt).reversed());
+        return found;
+    }
+
+    /** Removes the marker and lock of sessions that ended, uncleanly, before they wrote any draft. */
+    private void sweepEndedWithoutDraft() {
+        try (DirectoryStream<Path> locks = Files.newDirectoryStream(folder, MARKER_PREFIX + "*" + LOCK)) {
+            for (Path lockFile : locks) {
+                String name = lockFile.getFileName().toString();
+                String id = name.substring(MARKER_PREFIX.length(), name.length() - LOCK.length());
+                if (!id.equals(session) && !Files.exists(draftOf(id)) && !running(id)) {
+                    deleteIfThere(markerOf(id));
+                    deleteIfThere(lockFile);
+                }
+            }
+        } catch (IOException e) {
+            // housekeeping only: what is left is tried again at the next start
         }
     }
 
-    /** Marks a session as running, remembering which file (if any) the form shows. */
-    public void markRunning(Optional<Path> document) throws IOException {
-        ObjectNode m = JSON.createObjectNode();
+    /** Marks this session as running (taking its lock), remembering which file (if any) the form shows. */
+    public synchronized void markRunning(Optional<Path> document) throws IOException {
+        holdLock();
+        ObjectNode m = MAPPER.createObjectNode();
         m.put("running", true);
         document.ifPresent(d -> m.put("document", d.toAbsolutePath().toString()));
-        Storage.writePrivately(folder.resolve(MARKER), JSON.writeValueAsBytes(m));
+        Storage.writePrivately(markerOf(session), MAPPER.writeValueAsBytes(m));
     }
 
-    public void saveDraft(byte[] caseJson) throws IOException {
-        Storage.writePrivately(folder.resolve(DRAFT), caseJson);
+    public synchronized void saveDraft(byte[] caseJson) throws IOException {
+        holdLock();
+        Storage.writePrivately(draftOf(session), caseJson);
     }
 
-    /** The session ends cleanly: the draft has been saved or deliberately thrown away. */
-    public void endCleanly() throws IOException {
-        deleteIfThere(folder.resolve(DRAFT));
-        deleteIfThere(folder.resolve(MARKER));
+    /**
+     * Takes over a crashed session's draft after its content was restored into this session: the draft file
+     * becomes this session's draft (one atomic move, so a crash at any moment leaves it findable), and the old
+     * session's other files go.
+     */
+    public synchronized void adopt(Draft crashed) throws IOException {
+        holdLock();
+        Files.move(draftOf(crashed.session()), draftOf(session), StandardCopyOption.REPLACE_EXISTING,
+                StandardCopyOption.ATOMIC_MOVE);
+        deleteIfThere(markerOf(crashed.session()));
+        deleteIfThere(lockOf(crashed.session()));
     }
 
-    /** Throws the draft away (the user declined to restore it, or saved the case). */
-    public void discardDraft() throws IOException {
-        deleteIfThere(folder.resolve(DRAFT));
+    /** Throws a crashed session's draft away (the user declined it), with its other files. */
+    public void discard(Draft crashed) throws IOException {
+        deleteIfThere(draftOf(crashed.session()));
+        deleteIfThere(markerOf(crashed.session()));
+        deleteIfThere(lockOf(crashed.session()));
+    }
+
+    /**
+     * Keeps a crashed draft that cannot be read back into the form under another name, so it is neither lost
+     * nor offered at every start; returns where it now is.
+     */
+    public Path setAside(Draft crashed) throws IOException {
+        Path kept = folder.resolve(SET_ASIDE_PREFIX + draftOf(crashed.session()).getFileName());
+        Files.move(draftOf(crashed.session()), kept, StandardCopyOption.REPLACE_EXISTING);
+        deleteIfThere(markerOf(crashed.session()));
+        deleteIfThere(lockOf(crashed.session()));
+        return kept;
+    }
+
+    /** The session ends cleanly: its draft has been saved or deliberately thrown away. */
+    public synchronized void endCleanly() throws IOException {
+        deleteIfThere(draftOf(session));
+        deleteIfThere(markerOf(session));
+        releaseLock();
+        deleteIfThere(lockOf(session));
+    }
+
+    /** Throws this session's draft away (the case was saved to a file, which holds it now). */
+    public synchronized void discardDraft() throws IOException {
+        deleteIfThere(draftOf(session));
+    }
+
+    /**
+     * What a crash does to the store: lets go of the lock and leaves every file in place. For a process that
+     * goes on after its form was torn down without a clean end (and for tests that simulate a crash).
+     */
+    public synchronized void abandon() {
+        releaseLock();
+    }
+
+    private void holdLock() throws IOException {
+        if (lock != null) {
+            return;
+        }
+        Path file = lockOf(session);
+        if (!Files.exists(file)) {
+            Storage.writePrivately(file, new byte[0]);
+        }
+        FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE);
+        try {
+            FileLock taken = channel.tryLock();
+            if (taken == null) {
+                throw new IOException("the session lock " + file + " is held by another program");
+            }
+            lockChannel = channel;
+            lock = taken;
+        } catch (IOException | RuntimeException e) {
+            channel.close();
+            throw e;
+        }
+    }
+
+    private void releaseLock() {
+        try {
+            if (lock != null) {
+                lock.release();
+            }
+            if (lockChannel != null) {
+                lockChannel.close();
+            }
+        } catch (IOException e) {
+            // closing the channel releases the lock whatever happens here; nothing is lost
+        } finally {
+            lock = null;
+            lockChannel = null;
+        }
+    }
+
+    /**
+     * True when another form is still running session {@code id}: its lock is held, by another process or by
+     * another window of this one. A session without a lock file never took it, so it is not running either.
+     */
+    private boolean running(String id) {
+        Path file = lockOf(id);
+        if (!Files.exists(file)) {
+            return false;
+        }
+        try (FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE)) {
+            FileLock probe = channel.tryLock();
+            if (probe == null) {
+                return true;
+            }
+            probe.release();
+            return false;
+        } catch (OverlappingFileLockException sameProcess) {
+            return true;
+        } catch (IOException unreadable) {
+            return true; // when in doubt, leave another session's files alone
+        }
+    }
+
+    private Optional<Draft> read(String id) {
+        try {
+            byte[] json = Files.readAllBytes(draftOf(id));
+            Instant savedAt = Files.getLastModifiedTime(draftOf(id)).toInstant();
+            return Optional.of(new Draft(id, json, document(id), savedAt));
+        } catch (IOException e) {
+            return Optional.empty(); // gone meanwhile (another form took it) or unreadable: left where it is
+        }
+    }
+
+    /** The document a session's marker names; a missing or damaged marker only loses the file name. */
+    private Optional<Path> document(String id) {
+        try {
+            JsonNode doc = MAPPER.readTree(Files.readAllBytes(markerOf(id))).get("document");
+            if (doc != null && doc.isTextual() && !doc.asText().isBlank()) {
+                return Optional.of(Path.of(doc.asText()));
+            }
+        } catch (IOException | RuntimeException noMarker) {
+            // the draft itself is what matters
+        }
+        return Optional.empty();
+    }
+
+    private Path draftOf(String id) {
+        return folder.resolve(DRAFT_PREFIX + id + JSON);
+    }
+
+    private Path markerOf(String id) {
+        return folder.resolve(MARKER_PREFIX + id + JSON);
+    }
+
+    private Path lockOf(String id) {
+        return folder.resolve(MARKER_PREFIX + id + LOCK);
     }
 
     private static void deleteIfThere(Path p) throws IOException {
@@ -96,12 +287,14 @@ public final class DraftStore {
     /**
      * A draft found at start-up.
      *
+     * @param session  the session that wrote it
      * @param caseJson the form as case JSON
      * @param document the file the form showed then, if it had one
      * @param savedAt  when the draft was last written
      */
-    public record Draft(byte[] caseJson, Optional<Path> document, Instant savedAt) {
+    public record Draft(String session, byte[] caseJson, Optional<Path> document, Instant savedAt) {
         public Draft {
+            Objects.requireNonNull(session, "session");
             Objects.requireNonNull(caseJson, "caseJson");
             Objects.requireNonNull(document, "document");
             Objects.requireNonNull(savedAt, "savedAt");

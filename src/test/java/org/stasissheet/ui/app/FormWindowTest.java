@@ -116,15 +116,18 @@ class FormWindowTest {
         FormHarness.fx(() -> window.stage().fireEvent(
                 new WindowEvent(window.stage(), WindowEvent.WINDOW_CLOSE_REQUEST)));
         assertTrue(shell.asked.stream().noneMatch(q -> q.startsWith("unsaved: ")), shell.asked.toString());
-        assertFalse(Files.exists(data.resolve("session.json")));
+        try (var left = Files.list(data)) {
+            assertTrue(left.noneMatch(f -> f.getFileName().toString().matches("(draft|session)-.*")),
+                    "a clean end leaves no draft, marker or lock of its own");
+        }
     }
 
     @Test
     @DisplayName("an autosaved draft is offered after a simulated crash and restored with what was typed")
     void crashRestore(FxRobot robot) throws Exception {
         type(robot, "patient-label", "Invented patient, bed 12");
-        FormHarness.waitUntil(() -> Files.exists(data.resolve("draft.json"))
-                && read(data.resolve("draft.json")).contains("bed 12"));
+        Path draft = window.drafts().draftFile();
+        FormHarness.waitUntil(() -> Files.exists(draft) && read(draft).contains("bed 12"));
         FormHarness.crash(window);
 
         ScriptedShell next = new ScriptedShell();
@@ -140,13 +143,66 @@ class FormWindowTest {
     @DisplayName("declining the draft throws it away and opens the demo case")
     void crashDecline(FxRobot robot) throws Exception {
         type(robot, "patient-label", "Invented patient, bed 13");
-        FormHarness.waitUntil(() -> Files.exists(data.resolve("draft.json"))
-                && read(data.resolve("draft.json")).contains("bed 13"));
+        Path draft = window.drafts().draftFile();
+        FormHarness.waitUntil(() -> Files.exists(draft) && read(draft).contains("bed 13"));
         FormHarness.crash(window);
 
         ScriptedShell next = new ScriptedShell();
         MainWindow again = FormHarness.open(FormHarness.settings(data, next));
         assertEquals("Demo patient A, ward 7", again.session().entry().field("patient.label").textProperty().get());
+        FormHarness.fx(() -> again.stage().hide());
+    }
+
+    @Test
+    @DisplayName("two windows at once keep their own drafts: neither is offered the other's, and closing one "
+            + "leaves the other's draft for its crash recovery")
+    void twoWindows(FxRobot robot) throws Exception {
+        type(robot, "patient-label", "Invented patient, bed 14");
+        Path first = window.drafts().draftFile();
+        FormHarness.waitUntil(() -> Files.exists(first) && read(first).contains("bed 14"));
+
+        ScriptedShell secondShell = new ScriptedShell();
+        secondShell.restore = true;
+        MainWindow second = FormHarness.open(FormHarness.settings(data, secondShell));
+        assertTrue(secondShell.asked.stream().noneMatch(q -> q.startsWith("restore: ")),
+                "a running window's draft is not offered: " + secondShell.asked);
+        assertEquals("Demo patient A, ward 7", second.session().entry().field("patient.label").textProperty().get());
+        FormHarness.fx(() -> second.session().entry().field("patient.label").textProperty()
+                .set("Invented patient, bed 15"));
+        Path secondDraft = second.drafts().draftFile();
+        FormHarness.waitUntil(() -> Files.exists(secondDraft) && read(secondDraft).contains("bed 15"));
+        assertTrue(read(first).contains("bed 14"), "the second window did not overwrite the first one's draft");
+
+        // the second window closes without saving (the scripted shell discards); the first one's draft stays
+        secondShell.unsavedAnswers.push(Shell.UnsavedChoice.DISCARD);
+        FormHarness.fx(() -> second.stage().fireEvent(
+                new WindowEvent(second.stage(), WindowEvent.WINDOW_CLOSE_REQUEST)));
+        assertFalse(Files.exists(secondDraft));
+        assertTrue(Files.exists(first) && read(first).contains("bed 14"));
+
+        // and the first window's crash is still recovered
+        FormHarness.crash(window);
+        ScriptedShell third = new ScriptedShell();
+        third.restore = true;
+        MainWindow again = FormHarness.open(FormHarness.settings(data, third));
+        assertEquals("Invented patient, bed 14", again.session().entry().field("patient.label").textProperty().get());
+        assertFalse(Files.exists(first), "the restored draft became the new window's own");
+        assertTrue(Files.exists(again.drafts().draftFile()));
+        FormHarness.fx(() -> again.stage().hide());
+    }
+
+    @Test
+    @DisplayName("a crashed draft the form cannot read back is kept under another name and named in the status")
+    void unreadableDraft(FxRobot robot) throws Exception {
+        Files.writeString(data.resolve("draft-left-by-a-crash.json"), "{ this is not JSON");
+        ScriptedShell next = new ScriptedShell();
+        next.restore = true;
+        MainWindow again = FormHarness.open(FormHarness.settings(data, next));
+        assertTrue(next.asked.stream().noneMatch(q -> q.startsWith("restore: ")), next.asked.toString());
+        Path kept = data.resolve("unreadable-draft-left-by-a-crash.json");
+        assertEquals("{ this is not JSON", read(kept), "nothing of it is lost");
+        assertTrue(again.actions().statusProperty().get().contains(kept.toString()),
+                again.actions().statusProperty().get());
         FormHarness.fx(() -> again.stage().hide());
     }
 
