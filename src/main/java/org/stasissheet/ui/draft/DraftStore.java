@@ -52,6 +52,7 @@ public final class DraftStore {
     private final String session;
     private FileChannel lockChannel;
     private FileLock lock;
+    private boolean lockUnsupported;
 
     /** A store for a new session in {@code folder}; nothing is written until the session marks itself running. */
     public DraftStore(Path folder) {
@@ -119,6 +120,10 @@ public final class DraftStore {
         ObjectNode m = MAPPER.createObjectNode();
         m.put("running", true);
         document.ifPresent(d -> m.put("document", d.toAbsolutePath().toString()));
+        // for file systems without locks: which process runs the session, told apart from a later one by its start
+        ProcessHandle self = ProcessHandle.current();
+        m.put("pid", self.pid());
+        self.info().startInstant().ifPresent(t -> m.put("started", t.toString()));
         Storage.writePrivately(markerOf(session), MAPPER.writeValueAsBytes(m));
     }
 
@@ -180,8 +185,12 @@ public final class DraftStore {
         releaseLock();
     }
 
+    /**
+     * Takes this session's lock once. Where the file system has no locks, the session goes on without one (the
+     * draft matters more than the lock); its marker's process id then tells whether it still runs.
+     */
     private void holdLock() throws IOException {
-        if (lock != null) {
+        if (lock != null || lockUnsupported) {
             return;
         }
         Path file = lockOf(session);
@@ -196,7 +205,10 @@ public final class DraftStore {
             }
             lockChannel = channel;
             lock = taken;
-        } catch (IOException | RuntimeException e) {
+        } catch (IOException noLocksHere) {
+            channel.close();
+            lockUnsupported = true;
+        } catch (RuntimeException e) {
             channel.close();
             throw e;
         }
@@ -236,8 +248,31 @@ public final class DraftStore {
             return false;
         } catch (OverlappingFileLockException sameProcess) {
             return true;
-        } catch (IOException unreadable) {
-            return true; // when in doubt, leave another session's files alone
+        } catch (IOException noLocksHere) {
+            return processRuns(id);
+        }
+    }
+
+    /**
+     * Whether the process a session's marker names is still the one that wrote it (same id, same start); when
+     * the marker or the process's start time cannot be read, the session counts as running: when in doubt,
+     * another session's files are left alone.
+     */
+    boolean processRuns(String id) {
+        try {
+            JsonNode m = MAPPER.readTree(Files.readAllBytes(markerOf(id)));
+            if (m == null || !m.path("pid").canConvertToLong()) {
+                return true;
+            }
+            Optional<ProcessHandle> process = ProcessHandle.of(m.path("pid").asLong());
+            if (process.isEmpty() || !process.get().isAlive()) {
+                return false;
+            }
+            Optional<Instant> started = process.get().info().startInstant();
+            return started.isEmpty() || !m.path("started").isTextual()
+                    || started.get().toString().equals(m.path("started").asText());
+        } catch (IOException | RuntimeException unreadable) {
+            return true;
         }
     }
 

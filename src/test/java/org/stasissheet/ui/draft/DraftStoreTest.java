@@ -121,6 +121,34 @@ class DraftStoreTest {
     }
 
     @Test
+    @DisplayName("without file locks, the marker's process id and start time tell a running session from a "
+            + "crashed one, and an unreadable marker counts as running (its files are left alone)")
+    void processIdFallback() throws Exception {
+        DraftStore self = new DraftStore(dir, "self");
+        self.markRunning(Optional.empty());
+        DraftStore probe = new DraftStore(dir, "probe");
+        assertTrue(probe.processRuns("self"), "this very process, same start");
+
+        String started = ProcessHandle.current().info().startInstant().map(Instant::toString).orElse("");
+        long pid = ProcessHandle.current().pid();
+        Files.writeString(dir.resolve("session-reused.json"),
+                "{\"pid\":" + pid + ",\"started\":\"1999-01-01T00:00:00Z\"}");
+        assertEquals(started.isEmpty(), probe.processRuns("reused"),
+                "the same id with another start time is another process (where the start time is known)");
+
+        Process ended = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-version").redirectErrorStream(true).start();
+        ended.getInputStream().readAllBytes();
+        assertTrue(ended.waitFor(30, TimeUnit.SECONDS));
+        Files.writeString(dir.resolve("session-ended.json"), "{\"pid\":" + ended.pid() + "}");
+        assertFalse(probe.processRuns("ended"), "a process that has exited");
+
+        Files.writeString(dir.resolve("session-garbled.json"), "{ not json");
+        assertTrue(probe.processRuns("garbled"));
+        assertTrue(probe.processRuns("missing"));
+    }
+
+    @Test
     @DisplayName("a form in another process: its draft is not offered while it runs, and is offered once the "
             + "process is killed (a real crash: the operating system lets go of the lock)")
     void otherProcess() throws Exception {
