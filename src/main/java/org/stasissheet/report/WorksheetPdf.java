@@ -227,7 +227,7 @@ public final class WorksheetPdf {
     }
 
     static String quantity(Quantity q) {
-        return Numbers.rounded(q.value(), 4) + " " + q.unit();
+        return WorksheetText.format(q);
     }
 
     // ---- sections -----------------------------------------------------------------------------------------

@@ -105,8 +105,12 @@ public final class WorksheetText {
         sb.append(NL);
     }
 
+    /**
+     * A value with its UCUM unit code, as the inputs tables print it. UCUM's dimensionless unit "1" (a hematocrit
+     * as a fraction) is written in words: "0.22 1" reads like a second number.
+     */
     static String format(Quantity q) {
-        return Numbers.rounded(q.value(), 4) + " " + q.unit();
+        return Numbers.rounded(q.value(), 4) + ("1".equals(q.unit()) ? " (fraction)" : " " + q.unit());
     }
 
     static String pad(String s, int width) {
