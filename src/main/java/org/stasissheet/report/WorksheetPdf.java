@@ -39,7 +39,6 @@ import org.stasissheet.intake.Enums;
 import org.stasissheet.intake.Findings;
 import org.stasissheet.intake.Observation;
 import org.stasissheet.intake.Patient;
-import org.stasissheet.measure.Numbers;
 import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.worksheet.InputLine;
