@@ -82,36 +82,38 @@ public final class DraftStore {
         if (!Files.isDirectory(folder)) {
             return found;
         }
-        try (DirectoryStream<Path> drafts = Files.newDirectoryStream(folder, DRAFT_PREFIX + "*" + JSON)) {
-            for (Path draft : drafts) {
-                String name = draft.getFileName().toString();
-                String id = name.substring(DRAFT_PREFIX.length(), name.length() - JSON.length());
-                if (!id.equals(session) && !running(id)) {
+        try {
+            for (String id : otherSessions(DRAFT_PREFIX, JSON)) {
+                if (!running(id)) {
                     read(id).ifPresent(found::add);
                 }
             }
+            // housekeeping: the marker and lock of sessions that ended, uncleanly, before they wrote any draft
+            for (String id : otherSessions(MARKER_PREFIX, LOCK)) {
+                if (!Files.exists(draftOf(id)) && !running(id)) {
+                    forget(id);
+                }
+            }
         } catch (IOException e) {
-            return found; // an unlistable folder offers nothing; the files stay where they are
+            // an unlistable folder offers what was found so far; the files stay where they are
         }
-        sweepEndedWithoutDraft();
         found.sort(Comparator.comparing(Draft::savedAt).reversed());
         return found;
     }
 
-    /** Removes the marker and lock of sessions that ended, uncleanly, before they wrote any draft. */
-    private void sweepEndedWithoutDraft() {
-        try (DirectoryStream<Path> locks = Files.newDirectoryStream(folder, MARKER_PREFIX + "*" + LOCK)) {
-            for (Path lockFile : locks) {
-                String name = lockFile.getFileName().toString();
-                String id = name.substring(MARKER_PREFIX.length(), name.length() - LOCK.length());
-                if (!id.equals(session) && !Files.exists(draftOf(id)) && !running(id)) {
-                    deleteIfThere(markerOf(id));
-                    deleteIfThere(lockFile);
+    /** The ids of the sessions other than this one that have a file {@code prefix + id + suffix}. */
+    private List<String> otherSessions(String prefix, String suffix) throws IOException {
+        List<String> ids = new ArrayList<>();
+        try (DirectoryStream<Path> files = Files.newDirectoryStream(folder, prefix + "*" + suffix)) {
+            for (Path f : files) {
+                String name = f.getFileName().toString();
+                String id = name.substring(prefix.length(), name.length() - suffix.length());
+                if (!id.equals(session)) {
+                    ids.add(id);
                 }
             }
-        } catch (IOException e) {
-            // housekeeping only: what is left is tried again at the next start
         }
+        return ids;
     }
 
     /** Marks this session as running (taking its lock), remembering which file (if any) the form shows. */
@@ -141,15 +143,13 @@ public final class DraftStore {
         holdLock();
         Files.move(draftOf(crashed.session()), draftOf(session), StandardCopyOption.REPLACE_EXISTING,
                 StandardCopyOption.ATOMIC_MOVE);
-        deleteIfThere(markerOf(crashed.session()));
-        deleteIfThere(lockOf(crashed.session()));
+        forget(crashed.session());
     }
 
     /** Throws a crashed session's draft away (the user declined it), with its other files. */
     public void discard(Draft crashed) throws IOException {
         deleteIfThere(draftOf(crashed.session()));
-        deleteIfThere(markerOf(crashed.session()));
-        deleteIfThere(lockOf(crashed.session()));
+        forget(crashed.session());
     }
 
     /**
@@ -159,9 +159,14 @@ public final class DraftStore {
     public Path setAside(Draft crashed) throws IOException {
         Path kept = folder.resolve(SET_ASIDE_PREFIX + draftOf(crashed.session()).getFileName());
         Files.move(draftOf(crashed.session()), kept, StandardCopyOption.REPLACE_EXISTING);
-        deleteIfThere(markerOf(crashed.session()));
-        deleteIfThere(lockOf(crashed.session()));
+        forget(crashed.session());
         return kept;
+    }
+
+    /** Deletes the marker and lock of an ended session whose draft has been dealt with. */
+    private void forget(String id) throws IOException {
+        deleteIfThere(markerOf(id));
+        deleteIfThere(lockOf(id));
     }
 
     /** The session ends cleanly: its draft has been saved or deliberately thrown away. */
@@ -198,20 +203,23 @@ public final class DraftStore {
             Storage.writePrivately(file, new byte[0]);
         }
         FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE);
+        FileLock taken = null;
         try {
-            FileLock taken = channel.tryLock();
-            if (taken == null) {
-                throw new IOException("the session lock " + file + " is held by another program");
-            }
-            lockChannel = channel;
-            lock = taken;
+            // null would mean another program holds this session's own lock, which a fresh random id rules out
+            taken = channel.tryLock();
         } catch (IOException noLocksHere) {
-            channel.close();
-            lockUnsupported = true;
-        } catch (RuntimeException e) {
-            channel.close();
-            throw e;
+            // a file system without locks: go on without one
+        } finally {
+            if (taken == null) {
+                channel.close();
+            }
         }
+        if (taken == null) {
+            lockUnsupported = true;
+            return;
+        }
+        lockChannel = channel;
+        lock = taken;
     }
 
     private void releaseLock() {
