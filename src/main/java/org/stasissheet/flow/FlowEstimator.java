@@ -169,7 +169,9 @@ public final class FlowEstimator {
     public static Estimate<CellVolume> cellVolume(Leukemia leukemia, RuleSet rules) {
         return switch (leukemia) {
             case NONE -> Estimate.unknown("no leukocrit estimate: no leukemia recorded");
-            case AML, APL -> Estimate.known(new CellVolume("myeloblast", rules.value(VOLUME_MYELOBLAST, "fL")));
+            // an acute leukemia not yet typed takes the larger blast volume: the leukocrit then errs high, the safe side
+            case AML, APL, ACUTE_UNTYPED -> Estimate.known(new CellVolume("myeloblast",
+                    rules.value(VOLUME_MYELOBLAST, "fL")));
             case ALL -> Estimate.known(new CellVolume("lymphoblast", rules.value(VOLUME_LYMPHOBLAST, "fL")));
             case CLL -> Estimate.known(new CellVolume("mature lymphocyte",
                     rules.value(VOLUME_MATURE_LYMPHOCYTE, "fL")));

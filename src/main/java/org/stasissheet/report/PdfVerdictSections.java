@@ -40,15 +40,15 @@ final class PdfVerdictSections {
                 pdf.small()));
         TumorLysisVerdict tl = sheet.tumorLysis();
         t.addCell(pdf.cell("Tumor lysis (Cairo-Bishop)", pdf.bodyBold()));
-        t.addCell(pdf.cell("laboratory " + VerdictWords.yesNo(tl.laboratory()) + "\nclinical "
-                + VerdictWords.yesNo(tl.clinical()), pdf.bodyBold()));
+        t.addCell(pdf.cell("laboratory " + VerdictWords.laboratory(tl) + "\nclinical "
+                + VerdictWords.clinical(tl), pdf.bodyBold()));
         t.addCell(pdf.cell(tl.reason() + "\n" + criteria(tl) + tl.window(), pdf.small()));
         doc.add(t);
         flags(pdf, doc, sheet.flags());
     }
 
     private static String unassessed(List<String> paths) {
-        return paths.isEmpty() ? "" : "\nNot assessed (counted as absent): " + String.join(", ", paths) + ".";
+        return paths.isEmpty() ? "" : "\nNot assessed (never counted as reassuring): " + String.join(", ", paths) + ".";
     }
 
     private static String organGrades(Findings f) {

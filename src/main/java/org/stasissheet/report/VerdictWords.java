@@ -18,24 +18,39 @@ public final class VerdictWords {
             case LIKELY -> "hyperviscosity syndrome likely";
             case POSSIBLE -> "hyperviscosity syndrome possible";
             case UNLIKELY -> "hyperviscosity syndrome unlikely";
-            case NOT_ASSESSABLE -> "hyperviscosity not assessable";
+            case NOT_ASSESSABLE -> v.toExamine().isEmpty() ? "hyperviscosity not assessable"
+                    : "hyperviscosity undecided: examine the signs first";
         };
     }
 
     public static String leukostasis(LeukostasisVerdict v) {
         String score = v.score().map(s -> " (score " + s + ")").orElse("");
         return switch (v.probability()) {
-            case NONE -> "no leukostasis" + score;
+            case NONE -> "no organ sign of leukostasis graded" + score;
             case POSSIBLE -> "leukostasis possible" + score;
             case PROBABLE -> "leukostasis probable" + score;
             case HIGHLY_PROBABLE -> "leukostasis highly probable" + score;
-            case NOT_ASSESSABLE -> "leukostasis not assessable";
+            case NOT_ASSESSABLE -> switch (v.gate()) {
+                case BELOW_TYPE_LEVEL -> "leukostasis not graded: count below the level for this leukemia type";
+                case NEEDS_DIAGNOSIS -> "leukostasis not graded until a blood film and diagnosis";
+                case GRADED -> "leukostasis undecided: grade every organ system";
+                default -> "leukostasis not assessable";
+            };
         };
     }
 
     public static String tumorLysis(TumorLysisVerdict v) {
-        return "tumor lysis (Cairo-Bishop): laboratory " + yesNo(v.laboratory()) + ", clinical "
-                + yesNo(v.clinical());
+        return "tumor lysis (Cairo-Bishop): laboratory " + laboratory(v) + ", clinical " + clinical(v);
+    }
+
+    /** Laboratory tumor lysis in words; a result resting on an unconfirmed potassium says so. */
+    public static String laboratory(TumorLysisVerdict v) {
+        return yesNo(v.laboratory()) + (v.dependsOnUnconfirmed() ? ", if the potassium is confirmed" : "");
+    }
+
+    public static String clinical(TumorLysisVerdict v) {
+        return yesNo(v.clinical()) + (v.dependsOnUnconfirmed() && v.clinical().orElse(false)
+                ? ", if the potassium is confirmed" : "");
     }
 
     static String yesNo(Optional<Boolean> b) {

@@ -66,6 +66,9 @@ public final class WorksheetJson {
         n.put("signs", v.signs());
         ArrayNode unassessed = n.putArray("signsNotAssessed");
         v.unassessed().forEach(unassessed::add);
+        n.put("viscosityTrust", v.viscosity().code());
+        ArrayNode toExamine = n.putArray("toExamine");
+        v.toExamine().forEach(toExamine::add);
         n.put("reason", v.reason());
         return n;
     }
@@ -73,6 +76,9 @@ public final class WorksheetJson {
     static ObjectNode leukostasis(LeukostasisVerdict v) {
         ObjectNode n = MAPPER.createObjectNode();
         n.put("assessed", v.assessed());
+        n.put("gate", v.gate().code());
+        ArrayNode toExamine = n.putArray("toExamine");
+        v.toExamine().forEach(toExamine::add);
         if (v.score().isPresent()) {
             n.put("score", v.score().get());
         } else {
@@ -88,6 +94,7 @@ public final class WorksheetJson {
         ObjectNode n = MAPPER.createObjectNode();
         optionalBoolean(n, "laboratory", v.laboratory());
         optionalBoolean(n, "clinical", v.clinical());
+        n.put("dependsOnUnconfirmed", v.dependsOnUnconfirmed());
         ArrayNode criteria = n.putArray("criteria");
         for (TumorLysisVerdict.Criterion c : v.criteria()) {
             ObjectNode k = criteria.addObject();
@@ -98,6 +105,7 @@ public final class WorksheetJson {
                 k.putNull("value");
             }
             k.put("met", c.met());
+            k.put("unconfirmed", c.unconfirmed());
             k.put("how", c.how());
         }
         n.put("windowConfirmed", v.windowConfirmed());

@@ -53,8 +53,8 @@ public final class WorksheetText {
                 .append(lk.score().map(s -> " (score " + s + " of 3)").orElse("")).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
         TumorLysisVerdict tl = sheet.tumorLysis();
-        sb.append("  Tumor lysis (Cairo-Bishop): laboratory ").append(yesNo(tl.laboratory()))
-                .append(", clinical ").append(yesNo(tl.clinical())).append(NL);
+        sb.append("  Tumor lysis (Cairo-Bishop): laboratory ").append(VerdictWords.laboratory(tl))
+                .append(", clinical ").append(VerdictWords.clinical(tl)).append(NL);
         sb.append("    ").append(tl.reason()).append(NL);
         for (TumorLysisVerdict.Criterion c : tl.criteria()) {
             sb.append("    - ").append(pad(c.analyte().label(), 11)).append(c.met() ? "met      " : "not met  ")
@@ -86,9 +86,6 @@ public final class WorksheetText {
         sb.append(NL);
     }
 
-    private static String yesNo(Optional<Boolean> b) {
-        return b.map(v -> v ? "yes" : "no").orElse("undecided (too few values)");
-    }
 
     static void inputs(StringBuilder sb, Worksheet sheet) {
         sb.append("INPUTS (as entered -> canonical)").append(NL);

@@ -74,7 +74,14 @@ public final class Fields {
     public static final String HYPERVISCOSITY_ASSESSMENT = "hyperviscosity.assessment";
     public static final String HYPERVISCOSITY_ROUTE = "hyperviscosity.route";
     public static final String HYPERVISCOSITY_SIGNS = "hyperviscosity.signs";
+    public static final String HYPERVISCOSITY_VISCOSITY = "hyperviscosity.viscosity";
+    public static final String HYPERVISCOSITY_TO_EXAMINE = "hyperviscosity.toExamine";
     public static final String LEUKOSTASIS_ASSESSED = "leukostasis.assessed";
+    public static final String LEUKOSTASIS_GATE = "leukostasis.gate";
+    public static final String LEUKOSTASIS_TO_EXAMINE = "leukostasis.toExamine";
+    public static final String ORGAN_SIGNS = "findings.organSigns";
+    public static final String POTASSIUM_DOUBTED = "potassium.doubted";
+    public static final String TUMOR_LYSIS_UNCONFIRMED = "tumorLysis.dependsOnUnconfirmed";
     public static final String LEUKOSTASIS_SCORE = "leukostasis.score";
     public static final String LEUKOSTASIS_PROBABILITY = "leukostasis.probability";
     public static final String HYPERLEUKOCYTOSIS = "hyperleukocytosis";
@@ -111,13 +118,20 @@ public final class Fields {
         k.put(HYPERVISCOSITY_ASSESSMENT, words(HyperviscosityVerdict.Assessment.class));
         k.put(HYPERVISCOSITY_ROUTE, words(HyperviscosityVerdict.Route.class));
         k.put(HYPERVISCOSITY_SIGNS, new Bool());
+        k.put(HYPERVISCOSITY_VISCOSITY, words(HyperviscosityVerdict.ViscosityTrust.class));
+        k.put(HYPERVISCOSITY_TO_EXAMINE, new Bool());
         k.put(LEUKOSTASIS_ASSESSED, new Bool());
+        k.put(LEUKOSTASIS_GATE, words(LeukostasisVerdict.Gate.class));
+        k.put(LEUKOSTASIS_TO_EXAMINE, new Bool());
+        k.put(ORGAN_SIGNS, new Bool());
+        k.put(POTASSIUM_DOUBTED, new Bool());
         k.put(LEUKOSTASIS_SCORE, new Number(Dimension.FRACTION, "1"));
         k.put(LEUKOSTASIS_PROBABILITY, words(LeukostasisVerdict.Probability.class));
         k.put(HYPERLEUKOCYTOSIS, new Bool());
         k.put(TUMOR_LYSIS_LABORATORY, new Bool());
         k.put(TUMOR_LYSIS_CLINICAL, new Bool());
         k.put(TUMOR_LYSIS_WINDOW_CONFIRMED, new Bool());
+        k.put(TUMOR_LYSIS_UNCONFIRMED, new Bool());
         return Collections.unmodifiableMap(k);
     }
 

@@ -8,13 +8,31 @@ import org.stasissheet.intake.Enums;
 /**
  * The leukostasis grading (Novotny et al., Eur J Haematol 2005), as decided by {@link Verdicts#leukostasis}.
  *
- * @param score empty when not assessable; else 0–3, the highest assessed organ grade
+ * <p>Guarantees: a score is given only when the grading applies ({@code gate} is {@code GRADED}); a score of 0
+ * ("none") only when every organ system was examined; otherwise {@code toExamine} names what to examine.
+ *
+ * @param assessed  the grading applies to this count and leukemia type
+ * @param gate      why the grading does or does not apply
+ * @param score     empty when not graded or undecided; else 0–3, the highest assessed organ grade
+ * @param toExamine organ systems (case paths) to examine before the sheet may call leukostasis absent
  */
-public record LeukostasisVerdict(boolean assessed, Optional<Integer> score, Probability probability, String reason) {
+public record LeukostasisVerdict(boolean assessed, Gate gate, Optional<Integer> score, Probability probability,
+                                 List<String> toExamine, String reason) {
     public LeukostasisVerdict {
+        Objects.requireNonNull(gate, "gate");
         Objects.requireNonNull(score, "score");
         Objects.requireNonNull(probability, "probability");
+        toExamine = List.copyOf(toExamine);
         Objects.requireNonNull(reason, "reason");
+        if (assessed != (gate == Gate.GRADED)) {
+            throw new IllegalArgumentException("assessed goes with the graded gate only");
+        }
+        if (score.isPresent() && gate != Gate.GRADED) {
+            throw new IllegalArgumentException("a score needs the graded gate");
+        }
+        if (score.map(s -> s == 0).orElse(false) && !toExamine.isEmpty()) {
+            throw new IllegalArgumentException("score 0 needs every organ system examined");
+        }
         score.ifPresent(s -> {
             if (s < 0 || s > 3) {
                 throw new IllegalArgumentException("score must be 0–3, was " + s);
@@ -47,8 +65,37 @@ public record LeukostasisVerdict(boolean assessed, Optional<Integer> score, Prob
             return code;
         }
 
+        /** How much action the verdict calls for: 3 highly probable down to 0 for none or not graded. */
+        public int alarm() {
+            return this == NOT_ASSESSABLE ? 0 : ordinal();
+        }
+
         public static Probability ofScore(int score) {
             return values()[score];
+        }
+    }
+
+    /** Whether the grading applies; the output word of {@code leukostasis.gate}. */
+    public enum Gate implements Enums.Coded {
+        /** No white cell count. */
+        NO_COUNT("no-count"),
+        /** Below the general entry count: organ signs more likely have another cause. */
+        BELOW_ENTRY("below-entry"),
+        /** No leukemia recorded and no blasts reported at a high count: a film and a diagnosis come first. */
+        NEEDS_DIAGNOSIS("needs-diagnosis"),
+        /** Lymphoid or mature cells below the count from which this leukemia type plugs vessels. */
+        BELOW_TYPE_LEVEL("below-type-level"),
+        GRADED("graded");
+
+        private final String code;
+
+        Gate(String code) {
+            this.code = code;
+        }
+
+        @Override
+        public String code() {
+            return code;
         }
     }
 

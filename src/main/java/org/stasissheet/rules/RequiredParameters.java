@@ -34,9 +34,14 @@ public final class RequiredParameters {
 
     public static final String SV_SYMPTOMATIC = "hyperviscosity.serumViscosity.symptomatic";
     public static final String SV_LOWER = "hyperviscosity.serumViscosity.lower";
+    public static final String SV_NORMAL_UPPER = "hyperviscosity.serumViscosity.normalUpper";
+    public static final String SV_WARM_SAMPLE = "hyperviscosity.serumViscosity.warmSample";
     public static final String LEVEL_PREFIX = "hyperviscosity.level.";
     public static final String LEUKOSTASIS_ASSESS_FROM = "leukostasis.assessFrom";
+    public static final String LEUKOSTASIS_GRADE_FROM_PREFIX = "leukostasis.gradeFrom.";
     public static final String HYPERLEUKOCYTOSIS_PREFIX = "hyperleukocytosis.wbc.";
+    public static final String PSEUDOHYPERKALAEMIA_WBC_CLL = "artefact.pseudohyperkalaemia.wbc.CLL";
+    public static final String PSEUDOHYPERKALAEMIA_WBC_ANY = "artefact.pseudohyperkalaemia.wbc";
     public static final String TLS_URIC_ACID = "tumorLysis.uricAcid";
     public static final String TLS_POTASSIUM = "tumorLysis.potassium";
     public static final String TLS_PHOSPHATE_ADULT = "tumorLysis.phosphate.adult";
@@ -51,11 +56,19 @@ public final class RequiredParameters {
     public static final List<Required> ALL = List.of(
             analyte(SV_SYMPTOMATIC, Analyte.SERUM_VISCOSITY),
             analyte(SV_LOWER, Analyte.SERUM_VISCOSITY),
+            analyte(SV_NORMAL_UPPER, Analyte.SERUM_VISCOSITY),
+            of(SV_WARM_SAMPLE, Dimension.TEMPERATURE),
             analyte(LEVEL_PREFIX + "IgM", Analyte.IGM),
             analyte(LEVEL_PREFIX + "IgG", Analyte.IGG),
             analyte(LEVEL_PREFIX + "IgG3", Analyte.IGG),
             analyte(LEVEL_PREFIX + "IgA", Analyte.IGA),
             analyte(LEUKOSTASIS_ASSESS_FROM, Analyte.WBC),
+            analyte(LEUKOSTASIS_GRADE_FROM_PREFIX + "ALL", Analyte.WBC),
+            analyte(LEUKOSTASIS_GRADE_FROM_PREFIX + "CML", Analyte.WBC),
+            analyte(LEUKOSTASIS_GRADE_FROM_PREFIX + "CLL", Analyte.WBC),
+            analyte(HYPERLEUKOCYTOSIS_PREFIX + "acute-untyped", Analyte.WBC),
+            analyte(PSEUDOHYPERKALAEMIA_WBC_CLL, Analyte.WBC),
+            analyte(PSEUDOHYPERKALAEMIA_WBC_ANY, Analyte.WBC),
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "AML", Analyte.WBC),
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "AMLMonocytic", Analyte.WBC),
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "APL", Analyte.WBC),

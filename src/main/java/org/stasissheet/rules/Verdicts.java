@@ -5,12 +5,14 @@ import static org.stasissheet.rules.RequiredParameters.*;
 import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.stasissheet.intake.Case;
+import org.stasissheet.intake.Cryoglobulin;
 import org.stasissheet.intake.Findings;
 import org.stasissheet.intake.Labs;
 import org.stasissheet.intake.Leukemia;
@@ -20,8 +22,11 @@ import org.stasissheet.intake.Paraprotein;
 import org.stasissheet.intake.Retinopathy;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.HyperviscosityVerdict.Assessment;
 import org.stasissheet.rules.HyperviscosityVerdict.Route;
+import org.stasissheet.rules.HyperviscosityVerdict.ViscosityTrust;
+import org.stasissheet.rules.LeukostasisVerdict.Gate;
 import org.stasissheet.rules.LeukostasisVerdict.Organ;
 import org.stasissheet.rules.LeukostasisVerdict.Probability;
 import org.stasissheet.rules.Threshold.Comparison;
@@ -72,6 +77,12 @@ public final class Verdicts {
         };
     }
 
+    /**
+     * The hyperviscosity verdict. Safety first: signs with a known paraprotein (or a cryoglobulin) make it at least
+     * possible whatever the numbers say (Gertz 2018: treat on the clinical picture); the one exception is a trusted
+     * serum viscosity within the normal range. A viscosity that may have lost a cryoprecipitate never lowers the
+     * verdict. "Unlikely" is withheld while a sign that could change it is unexamined.
+     */
     public static HyperviscosityVerdict hyperviscosity(Case c, RuleSet rules) {
         Findings f = c.findings();
         List<String> present = new ArrayList<>();
@@ -91,53 +102,123 @@ public final class Verdicts {
         sign(f.heartFailure(), "findings.heartFailure", "heart failure", present, unassessed);
         boolean signs = !present.isEmpty();
         String signText = signs ? "signs: " + String.join(", ", present) : "no sign of hyperviscosity recorded";
-        if (!unassessed.isEmpty()) {
-            signText += "; not assessed, counted as absent: " + String.join(", ", unassessed);
+
+        Paraprotein type = c.condition().paraprotein();
+        boolean cryoglobulin = c.condition().cryoglobulin() == Cryoglobulin.PRESENT;
+        boolean known = type != Paraprotein.NONE || cryoglobulin;
+        Optional<Measurement> sv = c.labs().get(Analyte.SERUM_VISCOSITY);
+        Optional<Measurement> level = analyteOf(type).flatMap(c.labs()::get);
+        ViscosityTrust trust = sv.map(m -> viscosityTrust(m, c.condition().cryoglobulin(), rules))
+                .orElse(ViscosityTrust.NOT_MEASURED);
+        String trustText = switch (trust) {
+            case NOT_TRUSTED -> "; the viscosity is not trusted to lower the verdict: a cryoglobulin is "
+                    + c.condition().cryoglobulin().code() + " and the sample was "
+                    + sv.flatMap(Measurement::temperature).map(t -> "read at " + t)
+                            .orElse("read at an unrecorded temperature")
+                    + ", and a sample cooled below " + Numbers.plain(rules.value(SV_WARM_SAMPLE, "Cel"))
+                    + " °C loses its cryoprecipitate and reads falsely low";
+            case WARMTH_UNCONFIRMED -> "; confirm that the viscosity sample was kept at "
+                    + Numbers.plain(rules.value(SV_WARM_SAMPLE, "Cel")) + " °C (cryoglobulin unknown)";
+            default -> "";
+        };
+
+        // A trusted viscosity within the normal range settles it, signs or not.
+        if (sv.isPresent() && trust != ViscosityTrust.NOT_TRUSTED
+                && rules.threshold(SV_NORMAL_UPPER).test(sv.get(), Comparison.AT_MOST)) {
+            String why = "serum viscosity " + sv.get().entered() + " is within the normal range (up to "
+                    + rules.threshold(SV_NORMAL_UPPER).describe() + ")"
+                    + (signs ? ", so hyperviscosity is unlikely and the " + signText + " need another explanation"
+                    : "; " + signText) + trustText + ".";
+            return new HyperviscosityVerdict(Assessment.UNLIKELY, Route.VISCOSITY, signs, unassessed, trust,
+                    List.of(), why);
         }
 
-        Optional<Measurement> sv = c.labs().get(Analyte.SERUM_VISCOSITY);
+        List<Candidate> candidates = new ArrayList<>();
         if (sv.isPresent()) {
             Measurement m = sv.get();
             Threshold high = rules.threshold(SV_SYMPTOMATIC);
             Threshold low = rules.threshold(SV_LOWER);
-            boolean atHigh = high.test(m, Comparison.AT_LEAST);
-            boolean atLow = low.test(m, Comparison.AT_LEAST);
             Assessment a;
             String why;
-            if (atHigh) {
+            if (high.test(m, Comparison.AT_LEAST)) {
                 a = signs ? Assessment.LIKELY : Assessment.POSSIBLE;
                 why = "serum viscosity " + m.entered() + " ≥ " + high.describe();
-            } else if (atLow && signs) {
-                a = Assessment.POSSIBLE;
+            } else if (low.test(m, Comparison.AT_LEAST)) {
+                a = signs ? Assessment.POSSIBLE : Assessment.UNLIKELY;
                 why = "serum viscosity " + m.entered() + " between " + low.describe() + " and " + high.describe();
             } else {
-                a = Assessment.UNLIKELY;
-                why = "serum viscosity " + m.entered() + (atLow ? " below " + high.describe()
-                        : " below " + low.describe());
+                a = signs ? Assessment.POSSIBLE : Assessment.UNLIKELY;
+                why = "serum viscosity " + m.entered() + " below " + low.describe()
+                        + (signs ? ", where symptoms are uncommon but reported: the signs are not overruled; look"
+                        + " for other causes too" : "");
             }
-            return new HyperviscosityVerdict(a, Route.VISCOSITY, signs, unassessed, why + "; " + signText + ".");
+            if (trust != ViscosityTrust.NOT_TRUSTED || a != Assessment.UNLIKELY) {
+                candidates.add(new Candidate(a, Route.VISCOSITY, why));
+            }
         }
-
-        Paraprotein type = c.condition().paraprotein();
-        Optional<Measurement> level = analyteOf(type).flatMap(c.labs()::get);
         if (level.isPresent()) {
             Measurement m = level.get();
             Threshold limit = rules.threshold(LEVEL_PREFIX + type.code());
             boolean above = limit.test(m, Comparison.AT_LEAST);
-            Assessment a = above ? (signs ? Assessment.LIKELY : Assessment.POSSIBLE) : Assessment.UNLIKELY;
-            String why = "no serum viscosity; " + type.code() + " " + m.entered() + (above ? " ≥ " : " below ")
-                    + limit.describe() + " (source: " + rules.parameter(LEVEL_PREFIX + type.code()).source() + ")";
-            return new HyperviscosityVerdict(a, Route.PARAPROTEIN, signs, unassessed, why + "; " + signText + ".");
+            Assessment a = above ? (signs ? Assessment.LIKELY : Assessment.POSSIBLE)
+                    : (signs ? Assessment.POSSIBLE : Assessment.UNLIKELY);
+            String why = type.code() + " " + m.entered() + (above ? " ≥ " : " below ") + limit.describe()
+                    + (!above && signs ? ", but hyperviscosity is reported below the usual levels (IgG3 and"
+                    + " polymerising IgA at lower levels than others): the signs decide" : "");
+            candidates.add(new Candidate(a, Route.PARAPROTEIN, why));
         }
-        if (type != Paraprotein.NONE && signs) {
-            return new HyperviscosityVerdict(Assessment.POSSIBLE, Route.CLINICAL_PICTURE, true, unassessed,
-                    "known " + type.code() + " paraprotein with " + signText
-                            + ", but neither a serum viscosity nor a paraprotein level: measure both now.");
+        if (known && signs) {
+            candidates.add(new Candidate(Assessment.POSSIBLE, Route.CLINICAL_PICTURE, "known "
+                    + (type != Paraprotein.NONE ? type.code() + " paraprotein" : "cryoglobulin")
+                    + " with signs: treat on the clinical picture and measure (or repeat at 37 °C) the serum"
+                    + " viscosity"));
         }
-        String why = type == Paraprotein.NONE
-                ? "no serum viscosity and no paraprotein recorded"
-                : "no serum viscosity, no " + type.code() + " level and " + signText;
-        return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, Route.NONE, signs, unassessed, why + ".");
+
+        // The most urgent route decides; on a tie a measured viscosity, then a paraprotein level, is named.
+        Optional<Candidate> best = candidates.stream()
+                .max(Comparator.comparingInt((Candidate k) -> k.assessment().alarm())
+                        .thenComparing(k -> -k.route().ordinal()));
+        String others = candidates.stream().filter(k -> best.map(b -> b != k).orElse(true))
+                .map(Candidate::why).reduce((x, y) -> x + "; " + y).map(x -> "; also " + x).orElse("");
+        if (best.isEmpty()) {
+            String why = !known && sv.isEmpty()
+                    ? "no paraprotein, cryoglobulin or serum viscosity recorded"
+                    : trust == ViscosityTrust.NOT_TRUSTED
+                    ? "no trustworthy value: measure the " + (type == Paraprotein.NONE ? "paraprotein"
+                    : type.code() + " level") + " and repeat the serum viscosity with the sample kept warm"
+                    : "no serum viscosity and no " + (type == Paraprotein.NONE ? "paraprotein" : type.code())
+                    + " level: measure both";
+            return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, Route.NONE, signs, unassessed, trust,
+                    List.of(), why + "; " + signText + trustText + ".");
+        }
+        Candidate b = best.get();
+        String why = b.why() + others + "; " + signText + trustText;
+        if (b.assessment() == Assessment.UNLIKELY && !unassessed.isEmpty()) {
+            return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, b.route(), signs, unassessed, trust,
+                    unassessed, "not decided: the values alone would make it unlikely, but these signs were not"
+                    + " examined and could change that: " + String.join(", ", unassessed) + ". " + why + ".");
+        }
+        if (!unassessed.isEmpty()) {
+            why += "; not assessed: " + String.join(", ", unassessed);
+        }
+        return new HyperviscosityVerdict(b.assessment(), b.route(), signs, unassessed, trust, List.of(), why + ".");
+    }
+
+    /** One way of reaching a hyperviscosity verdict, with its words. */
+    private record Candidate(Assessment assessment, Route route, String why) {
+    }
+
+    /** Whether a serum viscosity may lower the verdict: see {@link ViscosityTrust}. */
+    static ViscosityTrust viscosityTrust(Measurement sv, Cryoglobulin cryoglobulin, RuleSet rules) {
+        if (cryoglobulin == Cryoglobulin.ABSENT) {
+            return ViscosityTrust.TRUSTED;
+        }
+        double warm = rules.value(SV_WARM_SAMPLE, "Cel");
+        Optional<Quantity> t = sv.temperature();
+        if (t.isPresent()) {
+            return Comparison.BELOW.test(t.get().value(), warm) ? ViscosityTrust.NOT_TRUSTED : ViscosityTrust.TRUSTED;
+        }
+        return cryoglobulin == Cryoglobulin.PRESENT ? ViscosityTrust.NOT_TRUSTED : ViscosityTrust.WARMTH_UNCONFIRMED;
     }
 
     private static void sign(Observation o, String path, String label, List<String> present, List<String> unassessed) {
@@ -150,27 +231,51 @@ public final class Verdicts {
 
     // ---- leukostasis -------------------------------------------------------------------------------------------
 
+    /**
+     * The leukostasis grading, gated by leukemia type: acute leukemias (typed or not) and blasts with no diagnosis
+     * recorded are graded from the general entry count; ALL, CML and CLL from their own, higher count, because
+     * lymphoid and mature cells are smaller and more deformable (Lichtman & Rowe 1982). A score of 0 needs every
+     * organ system examined.
+     */
     public static LeukostasisVerdict leukostasis(Case c, RuleSet rules) {
         Optional<Measurement> wbc = c.labs().get(Analyte.WBC);
-        Threshold from = rules.threshold(LEUKOSTASIS_ASSESS_FROM);
+        Threshold entry = rules.threshold(LEUKOSTASIS_ASSESS_FROM);
         if (wbc.isEmpty()) {
-            return new LeukostasisVerdict(false, Optional.empty(), Probability.NOT_ASSESSABLE,
-                    "no white cell count: the grading applies to hyperleukocytic leukemia (WBC ≥ "
-                            + from.describe() + ").");
+            return notGraded(Gate.NO_COUNT, "no white cell count: the grading applies to hyperleukocytic leukemia"
+                    + " (WBC ≥ " + entry.describe() + ").");
         }
-        if (!from.test(wbc.get(), Comparison.AT_LEAST)) {
-            return new LeukostasisVerdict(false, Optional.empty(), Probability.NOT_ASSESSABLE,
-                    "WBC " + wbc.get().entered() + " is below " + from.describe()
-                            + ": the grading was built for hyperleukocytic leukemia, and breathlessness or"
-                            + " confusion at this count more likely has another cause.");
+        Measurement count = wbc.get();
+        Leukemia type = c.condition().leukemia();
+        if (!entry.test(count, Comparison.AT_LEAST)) {
+            return notGraded(Gate.BELOW_ENTRY, "WBC " + count.entered() + " is below " + entry.describe()
+                    + ": the grading was built for hyperleukocytic leukemia, and breathlessness or confusion at"
+                    + " this count more likely has another cause.");
         }
+        if (type == Leukemia.NONE && !blastsPresent(c)) {
+            return notGraded(Gate.NEEDS_DIAGNOSIS, "WBC " + count.entered() + " ≥ " + entry.describe()
+                    + " with no leukemia recorded and no blasts reported: leukostasis is not graded until a blood"
+                    + " film and a diagnosis say what the cells are; grade it at once if blasts are seen.");
+        }
+        Optional<String> typeLevel = switch (type) {
+            case ALL, CML, CLL -> Optional.of(LEUKOSTASIS_GRADE_FROM_PREFIX + type.code());
+            default -> Optional.empty();
+        };
+        if (typeLevel.isPresent() && !rules.threshold(typeLevel.get()).test(count, Comparison.AT_LEAST)) {
+            return notGraded(Gate.BELOW_TYPE_LEVEL, "WBC " + count.entered() + " is below "
+                    + rules.threshold(typeLevel.get()).describe() + ", the count from which " + type.code()
+                    + " cells are known to plug small vessels (they are smaller and more deformable than"
+                    + " myeloblasts): organ signs are not put down to leukostasis; look for another cause"
+                    + " (infection, bleeding, thrombosis) and grade again if the count rises.");
+        }
+        String from = typeLevel.map(id -> rules.threshold(id).describe()).orElse(entry.describe());
         Findings f = c.findings();
         Map<Organ, Optional<Integer>> grades = new LinkedHashMap<>();
-        grades.put(Organ.PULMONARY, f.pulmonaryGrade());
-        grades.put(Organ.NEUROLOGICAL, f.neurologicalGrade());
-        grades.put(Organ.OTHER, f.otherOrganGrade());
+        for (Organ o : Organ.values()) {
+            grades.put(o, grade(f, o));
+        }
         List<String> parts = new ArrayList<>();
         List<String> missing = new ArrayList<>();
+        List<String> missingPaths = new ArrayList<>();
         int max = -1;
         for (Map.Entry<Organ, Optional<Integer>> e : grades.entrySet()) {
             if (e.getValue().isPresent()) {
@@ -178,16 +283,39 @@ public final class Verdicts {
                 parts.add(e.getKey().label() + " " + e.getValue().get());
             } else {
                 missing.add(e.getKey().label());
+                missingPaths.add(e.getKey().path());
             }
         }
-        if (max < 0) {
-            return new LeukostasisVerdict(true, Optional.empty(), Probability.NOT_ASSESSABLE,
-                    "WBC " + wbc.get().entered() + " ≥ " + from.describe() + " but no organ grade was assessed.");
+        String graded = "WBC " + count.entered() + " ≥ " + from + (blastsPresent(c) && type == Leukemia.NONE
+                ? " with blasts and no leukemia recorded" : "") + "; ";
+        if (max < 1 && !missing.isEmpty()) {
+            return new LeukostasisVerdict(true, Gate.GRADED, Optional.empty(), Probability.NOT_ASSESSABLE,
+                    missingPaths, graded + "not decided: " + (parts.isEmpty() ? "no organ system was graded"
+                    : "no organ sign among those graded (" + String.join(", ", parts) + ")")
+                    + ", but these were not examined: " + String.join(", ", missing) + ".");
         }
-        String why = "highest organ grade " + max + " (" + String.join(", ", parts) + ")"
-                + (missing.isEmpty() ? "" : "; not assessed: " + String.join(", ", missing))
+        String why = graded + "highest organ grade " + max + " (" + String.join(", ", parts) + ")"
+                + (missing.isEmpty() ? "" : "; not examined, so the score can only rise: " + String.join(", ", missing))
                 + "; combination rule from memory: " + LeukostasisVerdict.COMBINATION_RULE + ".";
-        return new LeukostasisVerdict(true, Optional.of(max), Probability.ofScore(max), why);
+        return new LeukostasisVerdict(true, Gate.GRADED, Optional.of(max), Probability.ofScore(max),
+                max == 0 ? List.of() : missingPaths, why);
+    }
+
+    private static Optional<Integer> grade(Findings f, Organ organ) {
+        return switch (organ) {
+            case PULMONARY -> f.pulmonaryGrade();
+            case NEUROLOGICAL -> f.neurologicalGrade();
+            case OTHER -> f.otherOrganGrade();
+        };
+    }
+
+    private static LeukostasisVerdict notGraded(Gate gate, String reason) {
+        return new LeukostasisVerdict(false, gate, Optional.empty(), Probability.NOT_ASSESSABLE, List.of(), reason);
+    }
+
+    /** Circulating blasts reported above zero. */
+    static boolean blastsPresent(Case c) {
+        return c.labs().get(Analyte.BLASTS).map(b -> b.canonical() > 0).orElse(false);
     }
 
     /** WBC above the leukemia type's level; empty without a WBC or a leukemia type. */
@@ -215,10 +343,18 @@ public final class Verdicts {
                 criterion(c, Analyte.PHOSPHATE,
                         rules.threshold(child ? TLS_PHOSPHATE_CHILD : TLS_PHOSPHATE_ADULT), Comparison.AT_LEAST, change),
                 criterion(c, Analyte.CALCIUM, rules.threshold(TLS_CALCIUM), Comparison.AT_MOST, change));
+        if (potassiumDoubted(c, rules)) {
+            criteria = criteria.stream().map(k -> k.analyte() == Analyte.POTASSIUM && k.met()
+                    ? new Criterion(k.analyte(), k.value(), true, k.how()
+                    + " (met if confirmed: at this white count the potassium may leak from cells in the tube)",
+                    true) : k).toList();
+        }
         long present = criteria.stream().filter(k -> k.value().isPresent()).count();
         long met = criteria.stream().filter(Criterion::met).count();
+        long confirmedMet = criteria.stream().filter(k -> k.met() && !k.unconfirmed()).count();
 
         Optional<Boolean> laboratory = present < 2 ? Optional.empty() : Optional.of(met >= 2);
+        boolean dependsOnUnconfirmed = met >= 2 && confirmedMet < 2;
         Optional<Boolean> clinical = laboratory.map(lab -> lab && clinicalSign(c, rules));
         String phosphate = child ? "child phosphate limit (age below "
                 + Numbers.plain(rules.value(TLS_CHILD_BELOW_AGE, "a")) + ")"
@@ -226,6 +362,8 @@ public final class Verdicts {
         String reason = laboratory.isEmpty()
                 ? "only " + present + " of the 4 laboratory values present; at least 2 are needed to decide."
                 : met + " of 4 criteria met (" + present + " present, " + phosphate + ")"
+                        + (dependsOnUnconfirmed ? "; met only if the potassium is confirmed on a whole-blood sample"
+                        : "")
                         + (present < 4 ? "; a missing value could still change this" : "") + ".";
 
         Optional<LocalDate> start = c.condition().therapyStarted();
@@ -249,7 +387,21 @@ public final class Verdicts {
                     : "time window not confirmed: day " + offset + " from the start of therapy (" + start.get()
                             + ") is outside " + before + " days before to " + after + " days after.";
         }
-        return new TumorLysisVerdict(laboratory, clinical, criteria, confirmed, window, reason);
+        return new TumorLysisVerdict(laboratory, clinical, criteria, confirmed, window, reason, dependsOnUnconfirmed);
+    }
+
+    /**
+     * Whether a high potassium may be an artefact of fragile cells in the tube: CLL from its own count, any high
+     * count from the general one (sources with the parameters in rules/artefacts.yaml).
+     */
+    public static boolean potassiumDoubted(Case c, RuleSet rules) {
+        Optional<Measurement> wbc = c.labs().get(Analyte.WBC);
+        if (wbc.isEmpty()) {
+            return false;
+        }
+        boolean cll = c.condition().leukemia() == Leukemia.CLL
+                && rules.threshold(PSEUDOHYPERKALAEMIA_WBC_CLL).test(wbc.get(), Comparison.AT_LEAST);
+        return cll || rules.threshold(PSEUDOHYPERKALAEMIA_WBC_ANY).test(wbc.get(), Comparison.AT_LEAST);
     }
 
     private static Criterion criterion(Case c, Analyte analyte, Threshold limit, Comparison op, double change) {
@@ -318,13 +470,22 @@ public final class Verdicts {
         f.put(Fields.HYPERVISCOSITY_ASSESSMENT, new Fact.Word(hv.assessment().code()));
         f.put(Fields.HYPERVISCOSITY_ROUTE, new Fact.Word(hv.route().code()));
         f.put(Fields.HYPERVISCOSITY_SIGNS, new Fact.Bool(hv.signs()));
+        f.put(Fields.HYPERVISCOSITY_VISCOSITY, new Fact.Word(hv.viscosity().code()));
+        f.put(Fields.HYPERVISCOSITY_TO_EXAMINE, new Fact.Bool(!hv.toExamine().isEmpty()));
         f.put(Fields.LEUKOSTASIS_ASSESSED, new Fact.Bool(lk.assessed()));
+        f.put(Fields.LEUKOSTASIS_GATE, new Fact.Word(lk.gate().code()));
+        f.put(Fields.LEUKOSTASIS_TO_EXAMINE, new Fact.Bool(!lk.toExamine().isEmpty()));
+        f.put(Fields.ORGAN_SIGNS, new Fact.Bool(Arrays.stream(Organ.values())
+                .anyMatch(o -> grade(fi, o).map(g -> g >= 1).orElse(false))));
+        c.labs().get(Analyte.POTASSIUM).ifPresent(k ->
+                f.put(Fields.POTASSIUM_DOUBTED, new Fact.Bool(potassiumDoubted(c, rules))));
         lk.score().ifPresent(s -> f.put(Fields.LEUKOSTASIS_SCORE, new Fact.Number(s)));
         f.put(Fields.LEUKOSTASIS_PROBABILITY, new Fact.Word(lk.probability().code()));
         hyperleukocytosis(c, rules).ifPresent(h -> f.put(Fields.HYPERLEUKOCYTOSIS, new Fact.Bool(h)));
         tl.laboratory().ifPresent(b -> f.put(Fields.TUMOR_LYSIS_LABORATORY, new Fact.Bool(b)));
         tl.clinical().ifPresent(b -> f.put(Fields.TUMOR_LYSIS_CLINICAL, new Fact.Bool(b)));
         f.put(Fields.TUMOR_LYSIS_WINDOW_CONFIRMED, new Fact.Bool(tl.windowConfirmed()));
+        f.put(Fields.TUMOR_LYSIS_UNCONFIRMED, new Fact.Bool(tl.dependsOnUnconfirmed()));
         return new Facts(f);
     }
 }

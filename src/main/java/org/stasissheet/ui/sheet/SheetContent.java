@@ -15,6 +15,7 @@ import org.stasissheet.flow.WhatIf;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Estimate;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.report.VerdictWords;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
@@ -118,7 +119,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         hvLines.add(hv.reason());
         hvLines.add("Rests on: " + words(hv.route().code()));
         if (!hv.unassessed().isEmpty()) {
-            hvLines.add("Not assessed, counted as absent: " + String.join(", ", hv.unassessed()));
+            hvLines.add("Not assessed (never counted as reassuring): " + String.join(", ", hv.unassessed()));
         }
         boolean hvRaised = hv.assessment() == HyperviscosityVerdict.Assessment.LIKELY
                 || hv.assessment() == HyperviscosityVerdict.Assessment.POSSIBLE;
@@ -128,7 +129,8 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         boolean lkRaised = lk.score().map(s -> s >= 1).orElse(false);
 
         TumorLysisVerdict tl = ws.tumorLysis();
-        String tlWord = "LABORATORY " + yesNo(tl.laboratory()) + "\nCLINICAL " + yesNo(tl.clinical());
+        String tlWord = "LABORATORY " + upper(VerdictWords.laboratory(tl)) + "\nCLINICAL "
+                + upper(VerdictWords.clinical(tl));
         List<String> tlLines = new ArrayList<>();
         tlLines.add(tl.reason());
         for (TumorLysisVerdict.Criterion c : tl.criteria()) {
@@ -239,9 +241,6 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 .orElseGet(() -> "not estimated: " + e.whyUnknown().orElseThrow());
     }
 
-    private static String yesNo(Optional<Boolean> b) {
-        return b.map(v -> v ? "YES" : "NO").orElse("UNDECIDED");
-    }
 
     private static String words(String code) {
         return code.replace('-', ' ');
