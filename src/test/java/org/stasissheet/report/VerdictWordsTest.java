@@ -16,21 +16,23 @@ class VerdictWordsTest {
     // Novotny et al., Eur J Haematol 2005, as quoted by Piccirillo et al., Am J Hematol 2009 (DOMAIN.md §2).
     @ParameterizedTest(name = "score {0} -> {1}")
     @CsvSource({
-        "0, no leukostasis (score 0)",
+        "0, no organ sign of leukostasis graded (score 0)",
         "1, leukostasis possible (score 1)",
         "2, leukostasis probable (score 2)",
         "3, leukostasis highly probable (score 3)",
     })
     @DisplayName("leukostasis verdicts read as the grading's own words with the score")
     void leukostasis(int score, String words) {
-        LeukostasisVerdict v = new LeukostasisVerdict(true, Optional.of(score), Probability.ofScore(score), "test");
+        LeukostasisVerdict v = new LeukostasisVerdict(true, LeukostasisVerdict.Gate.GRADED, Optional.of(score),
+                Probability.ofScore(score), java.util.List.of(), "test");
         assertEquals(words, VerdictWords.leukostasis(v));
     }
 
     @Test
     @DisplayName("a leukostasis verdict without a score says it could not be assessed")
     void notAssessable() {
-        LeukostasisVerdict v = new LeukostasisVerdict(false, Optional.empty(), Probability.NOT_ASSESSABLE, "test");
+        LeukostasisVerdict v = new LeukostasisVerdict(false, LeukostasisVerdict.Gate.NO_COUNT, Optional.empty(),
+                Probability.NOT_ASSESSABLE, java.util.List.of(), "test");
         assertEquals("leukostasis not assessable", VerdictWords.leukostasis(v));
     }
 }

@@ -122,8 +122,8 @@ class CorruptedRuleSetTest {
     @Test
     @DisplayName("a required parameter in the wrong kind of unit: refused at its unit")
     void wrongUnitDimension() {
-        Map<String, byte[]> files = edit("leukostasis.yaml", "    value: 50\n    unit: \"10*9/L\"",
-                "    value: 50\n    unit: \"g/L\"");
+        Map<String, byte[]> files = edit("leukostasis.yaml", "    value: 200\n    unit: \"10*9/L\"",
+                "    value: 200\n    unit: \"g/L\"");
         RuleProblem p = only(refused(files));
         assertEquals("leukostasis.yaml", p.file());
         assertEquals(lineOf(files, "leukostasis.yaml", "unit: \"g/L\""), p.line());

@@ -27,13 +27,17 @@ class HyperviscosityVerdictTest {
     class WithViscosity {
         @ParameterizedTest(name = "SV {0} cP, signs {1} -> {2}")
         @CsvSource({
-            // truth table of the issue; 4.0 and 3.0 included (">= 4.0", "3.0 to < 4.0")
+            // 4.0 and 3.0 included (">= 4.0", "3.0 to < 4.0"); below 3 signs still make it possible, because
+            // symptoms are reported at 2-3 cP (DOMAIN section 6; Gertz 2018: treat on the clinical picture); a
+            // value within the normal range (up to 1.8 cP, Mehta & Singhal 2003) makes it unlikely even with signs
             "5.6,  true,  likely",
             "4.0,  true,  likely",
             "4.01, true,  likely",
             "3.99, true,  possible",
             "3.0,  true,  possible",
-            "2.99, true,  unlikely",
+            "2.99, true,  possible",
+            "1.81, true,  possible",
+            "1.8,  true,  unlikely",
             "5.6,  false, possible",
             "4.0,  false, possible",
             "3.99, false, unlikely",
@@ -50,12 +54,22 @@ class HyperviscosityVerdictTest {
         }
 
         @Test
-        @DisplayName("the viscosity decides even when the paraprotein is above its level")
-        void viscosityWins() {
+        @DisplayName("a trusted viscosity within the normal range decides even when the paraprotein is above its level")
+        void normalViscosityWins() {
             TestCases t = withSigns(true).paraprotein(Paraprotein.IGM).lab(Analyte.IGM, 6, "g/dL")
-                    .lab(Analyte.SERUM_VISCOSITY, 2.0, "cP");
+                    .lab(Analyte.SERUM_VISCOSITY, 1.8, "cP");
             assertEquals("unlikely", assessment(t));
             assertEquals(HyperviscosityVerdict.Route.VISCOSITY, t.assess().hyperviscosity().route());
+            assertTrue(t.fires("hyperviscosity.signs-other-cause"));
+        }
+
+        @Test
+        @DisplayName("above the normal range the most urgent route decides: a low viscosity never overrules the level")
+        void mostUrgentRouteWins() {
+            TestCases t = withSigns(true).paraprotein(Paraprotein.IGM).lab(Analyte.IGM, 6, "g/dL")
+                    .lab(Analyte.SERUM_VISCOSITY, 2.0, "cP");
+            assertEquals("likely", assessment(t));
+            assertEquals(HyperviscosityVerdict.Route.PARAPROTEIN, t.assess().hyperviscosity().route());
         }
     }
 
@@ -64,10 +78,12 @@ class HyperviscosityVerdictTest {
     class WithParaprotein {
         @ParameterizedTest(name = "{0} {1} {2}, signs {3} -> {4}")
         @CsvSource({
-            // IgM 3 g/dL (Mehta & Singhal 2003; Kwaan 2013), at the level is included
+            // IgM 3 g/dL (Mehta & Singhal 2003; Kwaan 2013), at the level is included; below a level, signs
+            // still make it possible (Kwaan 2013: IgG3 and polymerising IgA act at lower levels; Gertz 2018)
             "IgM,  3.0,  g/dL, true,  likely",
             "IgM,  3.0,  g/dL, false, possible",
-            "IgM,  2.99, g/dL, true,  unlikely",
+            "IgM,  2.99, g/dL, true,  possible",
+            "IgM,  2.99, g/dL, false, unlikely",
             "IgM,  30,   g/L,  false, possible",
             "IgM,  29.9, g/L,  false, unlikely",
             "IgM,  3000, mg/dL, false, possible",
@@ -80,7 +96,8 @@ class HyperviscosityVerdictTest {
             "IgG3, 3.99, g/dL, false, unlikely",
             // IgA about 6 g/dL (Mehta & Singhal 2003; Kwaan 2013 gives > 10-11 g/dL)
             "IgA,  6.0,  g/dL, true,  likely",
-            "IgA,  5.99, g/dL, true,  unlikely",
+            "IgA,  5.99, g/dL, true,  possible",
+            "IgA,  5.99, g/dL, false, unlikely",
             "IgA,  60,   g/L,  false, possible"})
         void truthTable(String type, double value, String unit, boolean signs, String expected) {
             Paraprotein p = org.stasissheet.intake.Enums.parse(Paraprotein.class, type).orElseThrow();
@@ -155,8 +172,8 @@ class HyperviscosityVerdictTest {
         }
 
         @Test
-        @DisplayName("unassessed signs count as absent, and fundoscopy is asked for (Menke 2006)")
-        void unassessedCountAsAbsent() {
+        @DisplayName("unassessed signs do not lower a raised verdict, and fundoscopy is asked for (Menke 2006)")
+        void unassessedDoNotLower() {
             TestCases t = TestCases.a().paraprotein(Paraprotein.IGM).lab(Analyte.SERUM_VISCOSITY, 4.5, "cP");
             Verdicts.Outcome o = t.assess();
             assertEquals("possible", o.hyperviscosity().assessment().code());

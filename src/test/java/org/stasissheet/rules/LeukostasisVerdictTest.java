@@ -17,13 +17,25 @@ class LeukostasisVerdictTest {
         "1, 0, 0, 1, possible",
         "0, 2, 1, 2, probable",
         "1, 1, 3, 3, highly-probable",
+        // an unexamined system can only raise the score: a raised score stands
         "-, 2, -, 2, probable",
+        // but nothing reassuring is said while a system is unexamined
+        "0, 0, -, -, not-assessable",
         "-, -, -, -, not-assessable"})
     void scoreIsTheHighestAssessedGrade(Integer pulmonary, Integer neuro, Integer other, Integer score, String word) {
-        LeukostasisVerdict v = TestCases.a().grades(pulmonary, neuro, other).lab(Analyte.WBC, 120, "10*9/L")
-                .assess().leukostasis();
+        LeukostasisVerdict v = TestCases.a().leukemia(Leukemia.AML, false).grades(pulmonary, neuro, other)
+                .lab(Analyte.WBC, 120, "10*9/L").assess().leukostasis();
         assertEquals(word, v.probability().code());
         assertEquals(score == null ? java.util.Optional.empty() : java.util.Optional.of(score), v.score());
+    }
+
+    @Test
+    @DisplayName("score 0 is withheld until every organ system is graded, and the sheet names what to examine")
+    void noReassuranceWithoutExamination() {
+        TestCases t = TestCases.a().leukemia(Leukemia.AML, false).grades(0, null, null).lab(Analyte.WBC, 120, "10*9/L");
+        LeukostasisVerdict v = t.assess().leukostasis();
+        assertEquals(java.util.List.of("findings.neurologicalGrade", "findings.otherOrganGrade"), v.toExamine());
+        assertTrue(t.fires("leukostasis.examine-first"));
     }
 
     @ParameterizedTest(name = "WBC {0} {1}: assessed {2}")
@@ -36,7 +48,8 @@ class LeukostasisVerdictTest {
         "49990,  /uL,    false",
         "50,     10*3/uL, true"})
     void assessedFromFifty(double wbc, String unit, boolean assessed) {
-        LeukostasisVerdict v = TestCases.a().grades(2, 0, 0).lab(Analyte.WBC, wbc, unit).assess().leukostasis();
+        LeukostasisVerdict v = TestCases.a().leukemia(Leukemia.AML, false).grades(2, 0, 0).lab(Analyte.WBC, wbc, unit)
+                .assess().leukostasis();
         assertEquals(assessed, v.assessed());
         assertEquals(assessed ? "probable" : "not-assessable", v.probability().code());
     }

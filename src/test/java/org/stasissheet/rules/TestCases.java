@@ -45,6 +45,14 @@ final class TestCases {
         return this;
     }
 
+    /** A serum viscosity in cP read at {@code celsius} (null: no temperature recorded). */
+    TestCases viscosityAt(double cp, Double celsius) {
+        Measurement m = new Measurement(Analyte.SERUM_VISCOSITY, new org.stasissheet.measure.Quantity(cp, "cP"),
+                Optional.ofNullable(celsius).map(t -> new org.stasissheet.measure.Quantity(t, "Cel")));
+        c = with(c.labs().with(m), c.baseline());
+        return this;
+    }
+
     TestCases baseline(Analyte a, double value, String unit) {
         c = with(c.labs(), c.baseline().with(Measurement.of(a, value, unit)));
         return this;
