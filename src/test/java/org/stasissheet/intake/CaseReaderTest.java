@@ -503,7 +503,7 @@ class CaseReaderTest {
 
             Problem leukemia = only(with("condition.leukemia", "\"AMML\""));
             assertEquals("condition.leukemia", leukemia.path());
-            assertContains(leukemia.message(), "none | AML | APL | ALL | CML | CLL");
+            assertContains(leukemia.message(), "none | acute-untyped | AML | APL | ALL | CML | CLL");
 
             Problem retinopathy = only(with("findings.retinopathy", "\"dilated\""));
             assertEquals("findings.retinopathy", retinopathy.path());
