@@ -63,9 +63,7 @@ class HazardLogTest {
                 String className = m.group(1);
                 String member = m.group(2);
                 Optional<Class<?>> type = testClass(className);
-                boolean found = type.map(t -> Stream.concat(Arrays.stream(t.getDeclaredMethods()),
-                        Arrays.stream(t.getDeclaredFields())).map(Member::getName).anyMatch(member::equals))
-                        .orElse(false);
+                boolean found = type.map(t -> members(t).anyMatch(member::equals)).orElse(false);
                 if (!found) {
                     missing.add(r.id() + ": " + className + "#" + member);
                 }
@@ -85,13 +83,20 @@ class HazardLogTest {
                 if (path.contains("*")) {
                     continue;
                 }
-                Path p = path.startsWith("rules/") ? Path.of(path) : Path.of("src/main/java/org/stasissheet", path);
+                Path p = path.endsWith(".yaml") ? Path.of(path) : Path.of("src/main/java/org/stasissheet", path);
                 if (!Files.exists(p)) {
                     missing.add(r.id() + ": " + path);
                 }
             }
         }
         assertEquals(List.of(), missing);
+    }
+
+    /** The methods and fields of a test class and of its nested test classes (JUnit's {@code @Nested}). */
+    private static Stream<String> members(Class<?> type) {
+        return Stream.concat(Stream.concat(Arrays.stream(type.getDeclaredMethods()),
+                        Arrays.stream(type.getDeclaredFields())).map(Member::getName),
+                Arrays.stream(type.getDeclaredClasses()).flatMap(HazardLogTest::members));
     }
 
     /** A test class by its simple name ({@code Outer.Inner} for a nested class), found under src/test/java. */
