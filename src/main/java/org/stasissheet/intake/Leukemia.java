@@ -5,18 +5,25 @@ package org.stasissheet.intake;
  * seen, lineage not yet known) and is graded as an acute leukemia; {@link #NONE} means no leukemia is recorded.
  */
 public enum Leukemia implements Enums.Coded {
-    NONE("none"),
-    ACUTE_UNTYPED("acute-untyped"),
-    AML("AML"),
-    APL("APL"),
-    ALL("ALL"),
-    CML("CML"),
-    CLL("CLL");
+    NONE("none", "no leukemia recorded"),
+    ACUTE_UNTYPED("acute-untyped", "acute leukemia, not yet typed"),
+    AML("AML", "AML"),
+    APL("APL", "APL"),
+    ALL("ALL", "ALL"),
+    CML("CML", "CML"),
+    CLL("CLL", "CLL");
 
     private final String code;
+    private final String words;
 
-    Leukemia(String code) {
+    Leukemia(String code, String words) {
         this.code = code;
+        this.words = words;
+    }
+
+    /** The type in clinical words, for people. */
+    public String words() {
+        return words;
     }
 
     @Override

@@ -19,8 +19,9 @@ public record Quantity(double value, String unit) {
         }
     }
 
+    /** For people: the number with the unit's symbol ({@link UnitSymbols}); files and JSON use the fields. */
     @Override
     public String toString() {
-        return Numbers.plain(value) + " " + unit;
+        return UnitSymbols.format(Numbers.plain(value), unit);
     }
 }

@@ -35,44 +35,39 @@ public final class HandoffNote {
         List<String> lines = new ArrayList<>();
         Case c = sheet.source();
         String who = withIdentifiers && !c.patient().label().isBlank() ? c.patient().label() + ": " : "";
-        lines.add("Situation: " + who + VerdictWords.hyperviscosity(sheet.hyperviscosity()) + "; "
-                + VerdictWords.leukostasis(sheet.leukostasis()) + "; "
-                + VerdictWords.tumorLysis(sheet.tumorLysis()) + ".");
-        lines.add("Background: " + background(c) + ".");
-        lines.add("Assessment: " + keyValues(sheet) + ".");
+        lines.add("Situation: " + who + situation(c) + ".");
+        lines.add("Background: " + background(c) + "; " + keyValues(sheet) + ".");
         List<Flag> actNow = sheet.flags().stream().filter(f -> f.level() == Level.ACT_NOW).toList();
         long review = sheet.flags().stream().filter(f -> f.level() == Level.REVIEW).count();
-        if (actNow.isEmpty()) {
-            lines.add("Recommendation: no act-now flag" + (review > 0 ? "; " + review + " to review on the worksheet"
-                    : "") + "; act on the clinical picture.");
-        } else {
-            lines.add("Recommendation (" + actNow.size() + " act-now flag" + (actNow.size() == 1 ? "" : "s")
-                    + (review > 0 ? ", " + review + " more to review on the worksheet" : "") + "):");
-            actNow.stream().limit(MAX_ACT_NOW_LINES)
-                    .forEach(f -> lines.add("  " + f.level().badge() + " " + f.title()));
-            if (actNow.size() > MAX_ACT_NOW_LINES) {
-                lines.add("  ... and " + (actNow.size() - MAX_ACT_NOW_LINES) + " more act-now flags on the worksheet");
-            }
+        lines.add("Assessment: " + VerdictWords.hyperviscosity(sheet.hyperviscosity()) + "; "
+                + VerdictWords.leukostasis(sheet.leukostasis()) + "; "
+                + VerdictWords.tumorLysis(sheet.tumorLysis()) + "."
+                + (actNow.isEmpty() ? "" : " Act now:"));
+        actNow.stream().limit(MAX_ACT_NOW_LINES).forEach(f -> lines.add("  " + f.level().badge() + " " + f.title()));
+        if (actNow.size() > MAX_ACT_NOW_LINES) {
+            lines.add("  ... and " + (actNow.size() - MAX_ACT_NOW_LINES) + " more act-now items on the worksheet");
         }
-        lines.add("Rule set " + sheet.ruleSet().name() + " " + sheet.ruleSet().version() + " (sha256 "
-                + sheet.ruleSet().shortHash() + ")" + (sheet.ruleSet().local() ? ", LOCAL PROTOCOL" : "")
+        lines.add("Recommendation: " + (actNow.isEmpty() ? "nothing flagged to act on now" : "the act-now items above")
+                + (review > 0 ? "; " + review + " item" + (review == 1 ? "" : "s") + " to review on the worksheet" : "")
+                + "; act on the clinical picture and reassess when it changes.");
+        lines.add("Rule set " + sheet.ruleSet().name() + " " + sheet.ruleSet().version()
+                + (sheet.ruleSet().local() ? ", LOCAL PROTOCOL" : "")
                 + ", assessed " + c.assessedAt().map(ReportTime.FORMAT::format).orElse("at an unrecorded time")
                 + ". " + Cautions.SHORT);
         return String.join(NL, lines) + NL;
     }
 
-    private static String background(Case c) {
+    /** Who the patient is, the disease, and the signs now: organ grades of 1 or more are signs. */
+    private static String situation(Case c) {
         List<String> parts = new ArrayList<>();
-        String person = c.patient().sex().map(Enums.Coded::code).orElse("sex not given")
-                + c.patient().ageYears().map(a -> ", " + a + " years").orElse(", age not given");
-        parts.add(person);
+        parts.add(c.patient().sex().map(Enums.Coded::code).orElse("sex not given")
+                + c.patient().ageYears().map(a -> ", " + a + " years").orElse(", age not given"));
         if (c.condition().paraprotein() != Paraprotein.NONE) {
             parts.add(c.condition().paraprotein().code() + " paraprotein");
         }
         if (c.condition().leukemia() != Leukemia.NONE) {
-            parts.add(c.condition().leukemia().code() + (c.condition().monocytic() ? " (monocytic)" : ""));
+            parts.add(c.condition().leukemia().words() + (c.condition().monocytic() ? " (monocytic)" : ""));
         }
-        c.condition().therapyStarted().ifPresent(d -> parts.add("therapy started " + d));
         Findings f = c.findings();
         List<String> signs = new ArrayList<>();
         sign(signs, f.mucosalBleeding(), "mucosal bleeding");
@@ -80,12 +75,19 @@ public final class HandoffNote {
         sign(signs, f.heartFailure(), "heart failure");
         sign(signs, f.arrhythmia(), "arrhythmia");
         sign(signs, f.seizure(), "seizure");
-        if (f.retinopathy() != Retinopathy.NOT_EXAMINED && f.retinopathy() != Retinopathy.NONE) {
-            signs.add("fundus " + f.retinopathy().code());
+        if (f.retinopathy().compareTo(Retinopathy.VENOUS_DILATION) >= 0) {
+            signs.add(f.retinopathy().words());
         }
+        grade(signs, "pulmonary", f.pulmonaryGrade());
+        grade(signs, "neurological", f.neurologicalGrade());
+        grade(signs, "other organ", f.otherOrganGrade());
         parts.add(signs.isEmpty() ? "no sign recorded as present" : "signs: " + String.join(", ", signs));
-        parts.add("organ grades pulmonary " + grade(f.pulmonaryGrade()) + ", neurological "
-                + grade(f.neurologicalGrade()) + ", other " + grade(f.otherOrganGrade()));
+        return String.join("; ", parts);
+    }
+
+    private static String background(Case c) {
+        List<String> parts = new ArrayList<>();
+        parts.add(c.condition().therapyStarted().map(d -> "therapy started " + d).orElse("no therapy start recorded"));
         if (c.plan().rituximabPlanned()) {
             parts.add("rituximab planned");
         }
@@ -101,8 +103,8 @@ public final class HandoffNote {
         }
     }
 
-    private static String grade(Optional<Integer> g) {
-        return g.map(String::valueOf).orElse("n/a");
+    private static void grade(List<String> signs, String organ, Optional<Integer> g) {
+        g.filter(v -> v >= 1).ifPresent(v -> signs.add(organ + " grade " + v + " of 3"));
     }
 
     /** The lab values as the laboratory reported them, with their units. */
@@ -111,7 +113,7 @@ public final class HandoffNote {
         if (labs.isEmpty()) {
             return "no lab values entered";
         }
-        return labs.stream().map(l -> l.label() + " " + Numbers.rounded(l.entered().value(), 4) + " "
-                + l.entered().unit()).collect(Collectors.joining(", "));
+        return labs.stream().map(l -> l.label() + " " + WorksheetText.format(l.entered()))
+                .collect(Collectors.joining(", "));
     }
 }

@@ -13,6 +13,7 @@ import java.util.Optional;
 import org.stasissheet.intake.Findings;
 import org.stasissheet.rules.Basis;
 import org.stasissheet.rules.Flag;
+import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
 import org.stasissheet.rules.Level;
 import org.stasissheet.rules.TumorLysisVerdict;
@@ -32,31 +33,32 @@ final class PdfVerdictSections {
         pdf.headerCells(t, "Question", "Verdict", "Why");
         t.addCell(pdf.cell("Hyperviscosity syndrome", pdf.bodyBold()));
         t.addCell(pdf.cell(VerdictWords.hyperviscosity(sheet.hyperviscosity()), pdf.bodyBold()));
-        t.addCell(pdf.cell(sheet.hyperviscosity().reason() + unassessed(sheet.hyperviscosity().unassessed()),
-                pdf.small()));
+        t.addCell(pdf.cell(sheet.hyperviscosity().reason(), pdf.small()));
         t.addCell(pdf.cell("Leukostasis (Novotny grading)", pdf.bodyBold()));
         t.addCell(pdf.cell(VerdictWords.leukostasis(sheet.leukostasis()), pdf.bodyBold()));
         t.addCell(pdf.cell(sheet.leukostasis().reason() + "\n" + organGrades(sheet.source().findings()),
                 pdf.small()));
         TumorLysisVerdict tl = sheet.tumorLysis();
         t.addCell(pdf.cell("Tumor lysis (Cairo-Bishop)", pdf.bodyBold()));
-        t.addCell(pdf.cell("laboratory " + VerdictWords.laboratory(tl) + "\nclinical "
-                + VerdictWords.clinical(tl), pdf.bodyBold()));
-        t.addCell(pdf.cell(tl.reason() + "\n" + criteria(tl) + tl.window(), pdf.small()));
+        if (tl.applies()) {
+            t.addCell(pdf.cell("laboratory " + VerdictWords.laboratory(tl) + "\nclinical "
+                    + VerdictWords.clinical(tl), pdf.bodyBold()));
+            t.addCell(pdf.cell(tl.reason() + "\n" + criteria(tl) + tl.window(), pdf.small()));
+        } else {
+            t.addCell(pdf.cell("not checked", pdf.body()));
+            t.addCell(pdf.cell(TumorLysisVerdict.NOT_CHECKED + ".", pdf.small()));
+        }
         doc.add(t);
         flags(pdf, doc, sheet.flags());
     }
 
-    private static String unassessed(List<String> paths) {
-        return paths.isEmpty() ? "" : "\nNot assessed (never counted as reassuring): " + String.join(", ", paths) + ".";
-    }
 
     private static String organGrades(Findings f) {
         List<String> parts = new ArrayList<>();
         grade(parts, LeukostasisVerdict.Organ.PULMONARY, f.pulmonaryGrade());
         grade(parts, LeukostasisVerdict.Organ.NEUROLOGICAL, f.neurologicalGrade());
         grade(parts, LeukostasisVerdict.Organ.OTHER, f.otherOrganGrade());
-        return "Grades: " + String.join("; ", parts) + " (descriptors from memory).";
+        return "Grades: " + String.join("; ", parts) + " (descriptors unverified \u2014 check the source).";
     }
 
     private static void grade(List<String> parts, LeukostasisVerdict.Organ organ, Optional<Integer> g) {
@@ -67,9 +69,9 @@ final class PdfVerdictSections {
     private static String criteria(TumorLysisVerdict tl) {
         StringBuilder sb = new StringBuilder();
         for (TumorLysisVerdict.Criterion c : tl.criteria()) {
-            sb.append(c.met() ? "met: " : "not met: ").append(c.analyte().label()).append(' ')
-                    .append(c.value().map(WorksheetPdf::quantity).orElse("—")).append(" (").append(c.how())
-                    .append(")\n");
+            sb.append(VerdictWords.criterion(c)).append(": ").append(c.analyte().label())
+                    .append(c.value().map(q -> " " + WorksheetPdf.quantity(q) + " (" + c.how() + ")").orElse(""))
+                    .append('\n');
         }
         return sb.toString();
     }
@@ -95,7 +97,7 @@ final class PdfVerdictSections {
             t.setSpacingBefore(3);
             t.setSpacingAfter(3);
             for (Flag f : group) {
-                PdfPCell badge = pdf.cell("[" + level.symbol() + "]\n" + level.word(), pdf.bodyBold());
+                PdfPCell badge = pdf.cell(level.symbol() + "\n" + level.word(), pdf.bodyBold());
                 PdfPCell body = pdf.cell(new Phrase());
                 if (level == Level.ACT_NOW) {
                     // a heavier frame as well as the word and symbol, so the urgent rows stand out in grey print
@@ -106,7 +108,7 @@ final class PdfVerdictSections {
                 p.add(new Chunk(PdfFonts.printable(f.title()) + "\n", pdf.bodyBold()));
                 p.add(new Chunk(PdfFonts.printable(f.explanation()) + "\n", pdf.body()));
                 int n = pdf.sources().cite(f.source());
-                p.add(new Chunk("Source [" + n + "] · basis: " + basisWords(f.basis()) + " · rule " + f.id(),
+                p.add(new Chunk("Source [" + n + "] · basis: " + f.basis().words() + " · rule " + f.id(),
                         f.basis() == Basis.FROM_MEMORY ? pdf.smallItalic() : pdf.small()));
                 body = pdf.cell(p);
                 if (level == Level.ACT_NOW) {
@@ -118,12 +120,4 @@ final class PdfVerdictSections {
         }
     }
 
-    static String basisWords(Basis b) {
-        return switch (b) {
-            case PUBLISHED -> "published";
-            case PUBLISHED_SECONDARY -> "published, quoted by a later source";
-            case COMMON_PRACTICE -> "common practice (no single source)";
-            case FROM_MEMORY -> "FROM MEMORY, not verified against a source";
-        };
-    }
 }

@@ -13,34 +13,41 @@ public final class VerdictWords {
     private VerdictWords() {
     }
 
+    /**
+     * Three kinds of answer, never confused: the question does not apply (with the reason), it cannot be decided yet
+     * (naming what is missing), or the verdict itself.
+     */
     public static String hyperviscosity(HyperviscosityVerdict v) {
         return switch (v.assessment()) {
             case LIKELY -> "hyperviscosity syndrome likely";
             case POSSIBLE -> "hyperviscosity syndrome possible";
             case UNLIKELY -> "hyperviscosity syndrome unlikely";
-            case NOT_ASSESSABLE -> v.toExamine().isEmpty() ? "hyperviscosity not assessable"
-                    : "hyperviscosity undecided: examine the signs first";
+            case NOT_ASSESSABLE -> !v.applies() ? "hyperviscosity: does not apply (no paraprotein recorded)"
+                    : !v.toExamine().isEmpty() ? "hyperviscosity: cannot be decided until the signs are examined"
+                    : "hyperviscosity: cannot be decided (no usable viscosity or paraprotein level)";
         };
     }
 
     public static String leukostasis(LeukostasisVerdict v) {
         String score = v.score().map(s -> " (score " + s + ")").orElse("");
         return switch (v.probability()) {
-            case NONE -> "no organ sign of leukostasis graded" + score;
+            case NONE -> "leukostasis: no organ sign graded" + score + "; re-examine";
             case POSSIBLE -> "leukostasis possible" + score;
             case PROBABLE -> "leukostasis probable" + score;
             case HIGHLY_PROBABLE -> "leukostasis highly probable" + score;
             case NOT_ASSESSABLE -> switch (v.gate()) {
-                case BELOW_TYPE_LEVEL -> "leukostasis not graded: count below the level for this leukemia type";
-                case NEEDS_DIAGNOSIS -> "leukostasis not graded until a blood film and diagnosis";
-                case GRADED -> "leukostasis undecided: grade every organ system";
-                default -> "leukostasis not assessable";
+                case NO_COUNT -> "leukostasis: cannot be decided (no white cell count)";
+                case BELOW_ENTRY -> "leukostasis: does not apply at this white count";
+                case BELOW_TYPE_LEVEL -> "leukostasis: does not apply at this count for this leukemia type";
+                case NEEDS_DIAGNOSIS -> "leukostasis: cannot be decided until a blood film and a diagnosis";
+                case GRADED -> "leukostasis: cannot be decided until every organ system is graded";
             };
         };
     }
 
     public static String tumorLysis(TumorLysisVerdict v) {
-        return "tumor lysis (Cairo-Bishop): laboratory " + laboratory(v) + ", clinical " + clinical(v);
+        return !v.applies() ? "tumor lysis " + TumorLysisVerdict.NOT_CHECKED
+                : "tumor lysis (Cairo-Bishop): laboratory " + laboratory(v) + ", clinical " + clinical(v);
     }
 
     /** Laboratory tumor lysis in words; a result resting on an unconfirmed potassium says so. */
@@ -54,7 +61,13 @@ public final class VerdictWords {
     }
 
     static String yesNo(Optional<Boolean> b) {
-        return b.map(v -> v ? "yes" : "no").orElse("undecided (too few values)");
+        return b.map(v -> v ? "yes" : "no").orElse("cannot be decided (too few values)");
+    }
+
+    /** One criterion: "met", "not met", or "not measured", which is not the same as "not met". */
+    public static String criterion(TumorLysisVerdict.Criterion c) {
+        return c.value().isEmpty() ? "not measured" : c.met() ? (c.unconfirmed() ? "met if confirmed" : "met")
+                : "not met";
     }
 
     /** Ranking key: 0 likely, 1 possible, 2 unlikely, 3 not assessable. */

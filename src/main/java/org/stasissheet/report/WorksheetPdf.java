@@ -264,13 +264,12 @@ public final class WorksheetPdf {
             doc.add(text("No measured values were entered.", body));
             return;
         }
-        PdfPTable t = table(2.2f, 1.6f, 1.6f, 1.8f);
-        headerCells(t, "Value", "as entered", "canonical units", "case-file key");
+        PdfPTable t = table(2.6f, 1.8f, 1.8f);
+        headerCells(t, "Value", "as entered", "in standard units");
         for (InputLine line : sheet.inputs()) {
-            t.addCell(cell(line.path().startsWith("baseline.") ? line.label() + " (baseline)" : line.label(), body));
+            t.addCell(cell(WorksheetText.label(line), body));
             t.addCell(cell(quantity(line.entered()), body));
             t.addCell(cell(line.entered().equals(line.canonical()) ? "(same)" : quantity(line.canonical()), body));
-            t.addCell(cell(line.path(), small));
         }
         doc.add(t);
     }
@@ -281,7 +280,7 @@ public final class WorksheetPdf {
         PdfPTable t = table(2.2f, 5f);
         headerCells(t, "Condition, findings and plan", "as entered");
         row(t, "Paraprotein", c.condition().paraprotein().code());
-        row(t, "Leukemia", c.condition().leukemia().code()
+        row(t, "Leukemia", c.condition().leukemia().words()
                 + (c.condition().monocytic() ? " (monocytic differentiation)" : ""));
         row(t, "Cryoglobulin", c.condition().cryoglobulin().code());
         row(t, "Therapy started", c.condition().therapyStarted().map(Object::toString).orElse("not started / not given"));
@@ -290,7 +289,7 @@ public final class WorksheetPdf {
         row(t, "Signs", "mucosal bleeding " + seen(f.mucosalBleeding()) + "; visual disturbance "
                 + seen(f.visualDisturbance()) + "; heart failure " + seen(f.heartFailure()) + "; arrhythmia "
                 + seen(f.arrhythmia()) + "; seizure " + seen(f.seizure()));
-        row(t, "Fundoscopy", f.retinopathy().code());
+        row(t, "Fundoscopy", f.retinopathy().words());
         row(t, "Plan", "rituximab " + (c.plan().rituximabPlanned() ? "planned" : "not planned")
                 + "; red-cell transfusion " + (c.plan().transfusionPlanned() ? "planned" : "not planned"));
         doc.add(t);

@@ -3,6 +3,7 @@ package org.stasissheet.report;
 import java.util.List;
 import java.util.Optional;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.measure.UnitSymbols;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
@@ -46,19 +47,23 @@ public final class WorksheetText {
     static void verdicts(StringBuilder sb, Worksheet sheet) {
         sb.append("VERDICTS").append(NL);
         HyperviscosityVerdict hv = sheet.hyperviscosity();
-        sb.append("  Hyperviscosity: ").append(hv.assessment().code()).append(NL);
+        sb.append("  Hyperviscosity: ").append(VerdictWords.hyperviscosity(hv)).append(NL);
         sb.append("    ").append(hv.reason()).append(NL);
         LeukostasisVerdict lk = sheet.leukostasis();
-        sb.append("  Leukostasis: ").append(lk.probability().code())
-                .append(lk.score().map(s -> " (score " + s + " of 3)").orElse("")).append(NL);
+        sb.append("  Leukostasis: ").append(VerdictWords.leukostasis(lk)).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
         TumorLysisVerdict tl = sheet.tumorLysis();
+        if (!tl.applies()) {
+            sb.append("  Tumor lysis: ").append(TumorLysisVerdict.NOT_CHECKED).append('.').append(NL).append(NL);
+            return;
+        }
         sb.append("  Tumor lysis (Cairo-Bishop): laboratory ").append(VerdictWords.laboratory(tl))
                 .append(", clinical ").append(VerdictWords.clinical(tl)).append(NL);
         sb.append("    ").append(tl.reason()).append(NL);
         for (TumorLysisVerdict.Criterion c : tl.criteria()) {
-            sb.append("    - ").append(pad(c.analyte().label(), 11)).append(c.met() ? "met      " : "not met  ")
-                    .append(c.value().map(WorksheetText::format).orElse("-")).append("  ").append(c.how()).append(NL);
+            sb.append("    - ").append(pad(c.analyte().label(), 11)).append(pad(VerdictWords.criterion(c), 17))
+                    .append(c.value().map(WorksheetText::format).orElse("")).append(c.value().isPresent()
+                            ? "  " + c.how() : "").append(NL);
         }
         sb.append("    ").append(tl.window()).append(NL);
         sb.append(NL);
@@ -68,7 +73,7 @@ public final class WorksheetText {
     static void flags(StringBuilder sb, Worksheet sheet) {
         sb.append("FLAGS").append(NL);
         if (sheet.flags().isEmpty()) {
-            sb.append("  (no rule fired; this does not rule anything out)").append(NL);
+            sb.append("  (no flag raised; this rules nothing out)").append(NL);
         }
         for (Level level : Level.values()) {
             List<Flag> group = sheet.flags().stream().filter(f -> f.level() == level).toList();
@@ -77,7 +82,7 @@ public final class WorksheetText {
             }
             sb.append("  ").append(level.badge()).append(NL);
             for (Flag f : group) {
-                sb.append("    [").append(level.symbol()).append("] ").append(f.title()).append(NL);
+                sb.append("    ").append(level.symbol()).append(' ').append(f.title()).append(NL);
                 sb.append("        ").append(f.explanation()).append(NL);
                 sb.append("        source: ").append(f.source()).append(" (").append(f.basis().code()).append(")")
                         .append("  id: ").append(f.id()).append(NL);
@@ -88,12 +93,12 @@ public final class WorksheetText {
 
 
     static void inputs(StringBuilder sb, Worksheet sheet) {
-        sb.append("INPUTS (as entered -> canonical)").append(NL);
+        sb.append("INPUTS (as entered -> in standard units)").append(NL);
         if (sheet.inputs().isEmpty()) {
             sb.append("  (no measured values)").append(NL);
         }
         for (InputLine line : sheet.inputs()) {
-            sb.append("  ").append(pad(line.path(), 28)).append(format(line.entered()));
+            sb.append("  ").append(pad(label(line), 32)).append(format(line.entered()));
             if (!line.entered().equals(line.canonical())) {
                 sb.append("  ->  ").append(format(line.canonical()));
             }
@@ -102,12 +107,18 @@ public final class WorksheetText {
         sb.append(NL);
     }
 
+    /** The input's name for people; a baseline value says so. */
+    static String label(InputLine line) {
+        return line.path().startsWith("baseline.") ? line.label() + " (baseline)" : line.label();
+    }
+
     /**
-     * A value with its UCUM unit code, as the inputs tables print it. UCUM's dimensionless unit "1" (a hematocrit
-     * as a fraction) is written in words: "0.22 1" reads like a second number.
+     * A value with its unit symbol, as the inputs tables print it. UCUM's dimensionless unit "1" (a hematocrit as a
+     * fraction) is written in words: "0.22 1" reads like a second number.
      */
     static String format(Quantity q) {
-        return Numbers.rounded(q.value(), 4) + ("1".equals(q.unit()) ? " (fraction)" : " " + q.unit());
+        String number = Numbers.rounded(q.value(), 4);
+        return "1".equals(q.unit()) ? number + " (fraction)" : UnitSymbols.format(number, q.unit());
     }
 
     static String pad(String s, int width) {

@@ -23,4 +23,14 @@ public enum Basis implements Enums.Coded {
     public String code() {
         return code;
     }
+
+    /** The basis in words for people; the rule files keep the code ({@code from-memory}). */
+    public String words() {
+        return switch (this) {
+            case PUBLISHED -> "published";
+            case PUBLISHED_SECONDARY -> "published, quoted by a later source";
+            case COMMON_PRACTICE -> "common practice (no single source)";
+            case FROM_MEMORY -> "unverified \u2014 check the source";
+        };
+    }
 }

@@ -33,6 +33,23 @@ public record HyperviscosityVerdict(Assessment assessment, Route route, boolean 
         }
     }
 
+    /** A sign's case path in clinical words ("findings.retinopathy" is "the fundi"), for every human text. */
+    public static String signName(String path) {
+        return switch (path) {
+            case "findings.mucosalBleeding" -> "mucosal bleeding";
+            case "findings.visualDisturbance" -> "visual disturbance";
+            case "findings.retinopathy" -> "the fundi";
+            case "findings.neurologicalGrade" -> "neurological symptoms (grade)";
+            case "findings.heartFailure" -> "heart failure";
+            default -> path;
+        };
+    }
+
+    /** The question does not apply to this patient (no paraprotein, cryoglobulin or serum viscosity recorded). */
+    public boolean applies() {
+        return route != Route.NONE;
+    }
+
     /** The output word of {@code hyperviscosity.assessment}. */
     public enum Assessment implements Enums.Coded {
         LIKELY("likely", 2),
@@ -59,11 +76,16 @@ public record HyperviscosityVerdict(Assessment assessment, Route route, boolean 
         }
     }
 
-    /** What the assessment rested on: a measured viscosity, a paraprotein level, the clinical picture alone, nothing. */
+    /**
+     * What the assessment rested on: a measured viscosity, a paraprotein level, the clinical picture alone; or
+     * {@code MISSING} (a paraprotein, cryoglobulin or viscosity is recorded but no usable value or sign decides it)
+     * and {@code NONE} (nothing points to hyperviscosity: the question does not apply).
+     */
     public enum Route implements Enums.Coded {
         VISCOSITY("viscosity"),
         PARAPROTEIN("paraprotein"),
         CLINICAL_PICTURE("clinical-picture"),
+        MISSING("missing"),
         NONE("none");
 
         private final String code;

@@ -3,13 +3,14 @@ package org.stasissheet.rules;
 import org.stasissheet.intake.Enums;
 
 /**
- * How urgently a flag asks for attention, most urgent first. Every renderer shows the word and the symbol
- * together, never a colour alone. The symbols are plain ASCII so a pasted handoff keeps them.
+ * How urgently a flag asks for attention, most urgent first. Every renderer shows the word and the mark together,
+ * never a colour alone. The mark is our own three-step gauge of filled and open dots (three filled: act now), made
+ * of two characters that survive copying into a plain-text note and print in the embedded font.
  */
 public enum Level implements Enums.Coded {
-    ACT_NOW("act-now", "ACT NOW", "!!!"),
-    REVIEW("review", "REVIEW", "!"),
-    NOTE("note", "NOTE", "i");
+    ACT_NOW("act-now", "ACT NOW", "●●●"),
+    REVIEW("review", "REVIEW", "●●○"),
+    NOTE("note", "NOTE", "●○○");
 
     private final String code;
     private final String word;
@@ -35,8 +36,8 @@ public enum Level implements Enums.Coded {
         return symbol;
     }
 
-    /** Symbol and word together, e.g. "[!!!] ACT NOW". */
+    /** Mark and word together, e.g. "●●● ACT NOW". */
     public String badge() {
-        return "[" + symbol + "] " + word;
+        return symbol + " " + word;
     }
 }

@@ -69,10 +69,12 @@ public record Threshold(Quantity value, List<Quantity> equivalents, Optional<Str
         return op.test(number, dimension.convert(value.value(), value.unit(), unit));
     }
 
-    /** "4 cP (hyperviscosity.serumViscosity.symptomatic)". */
+    /**
+     * The limit for people, "4 cP", "100 ×10⁹/L": the parameter's id belongs in the sources and provenance, never in a
+     * sentence.
+     */
     public String describe() {
-        String figure = Numbers.plain(value.value()) + ("1".equals(value.unit()) ? "" : " " + value.unit());
-        return parameterId.map(id -> figure + " (" + id + ")").orElse(figure);
+        return value.toString();
     }
 
     /** The four comparisons of the condition vocabulary. */

@@ -9,6 +9,8 @@ import org.stasissheet.measure.Quantity;
 /**
  * Cairo–Bishop tumor lysis (Cairo MS, Bishop M, Br J Haematol 2004), as decided by {@link Verdicts#tumorLysis}.
  *
+ * @param applies    worth checking: a leukemia, a start of therapy or a tumor-lysis laboratory value is recorded;
+ *                   when false the renderers say in one quiet line that it was not checked, and why
  * @param laboratory empty when fewer than two of the four criteria could be evaluated
  * @param clinical   empty exactly when {@code laboratory} is empty; false when laboratory is false
  * @param window     whether the assessment falls in the published window around the start of therapy, in words
@@ -16,7 +18,7 @@ import org.stasissheet.measure.Quantity;
  *                   artefact (a potassium at a count where pseudohyperkalaemia occurs): it holds "if confirmed".
  *                   Such a criterion is counted, never silently dropped, and every text says so.
  */
-public record TumorLysisVerdict(Optional<Boolean> laboratory, Optional<Boolean> clinical, List<Criterion> criteria,
+public record TumorLysisVerdict(boolean applies, Optional<Boolean> laboratory, Optional<Boolean> clinical, List<Criterion> criteria,
                                 boolean windowConfirmed, String window, String reason, boolean dependsOnUnconfirmed) {
     public TumorLysisVerdict {
         Objects.requireNonNull(laboratory, "laboratory");
@@ -28,6 +30,10 @@ public record TumorLysisVerdict(Optional<Boolean> laboratory, Optional<Boolean> 
             throw new IllegalArgumentException("clinical is decided exactly when laboratory is");
         }
     }
+
+    /** The one quiet line shown when tumor lysis does not apply. */
+    public static final String NOT_CHECKED = "not checked: no leukemia, no therapy and none of its laboratory values"
+            + " recorded";
 
     /**
      * One laboratory criterion.

@@ -92,7 +92,7 @@ public final class Verdicts {
         if (f.retinopathy() == Retinopathy.NOT_EXAMINED) {
             unassessed.add("findings.retinopathy");
         } else if (f.retinopathy().compareTo(Retinopathy.VENOUS_DILATION) >= 0) {
-            present.add("retinopathy (" + f.retinopathy().code() + ")");
+            present.add(f.retinopathy().words());
         }
         if (f.neurologicalGrade().isEmpty()) {
             unassessed.add("findings.neurologicalGrade");
@@ -182,26 +182,31 @@ public final class Verdicts {
                 .map(Candidate::why).reduce((x, y) -> x + "; " + y).map(x -> "; also " + x).orElse("");
         if (best.isEmpty()) {
             String why = !known && sv.isEmpty()
-                    ? "no paraprotein, cryoglobulin or serum viscosity recorded"
+                    ? "does not apply: no paraprotein, cryoglobulin or serum viscosity recorded"
                     : trust == ViscosityTrust.NOT_TRUSTED
                     ? "no trustworthy value: measure the " + (type == Paraprotein.NONE ? "paraprotein"
                     : type.code() + " level") + " and repeat the serum viscosity with the sample kept warm"
                     : "no serum viscosity and no " + (type == Paraprotein.NONE ? "paraprotein" : type.code())
                     + " level: measure both";
-            return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, Route.NONE, signs, unassessed, trust,
-                    List.of(), why + "; " + signText + trustText + ".");
+            return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, !known && sv.isEmpty() ? Route.NONE
+                    : Route.MISSING, signs, unassessed, trust, List.of(), why + "; " + signText + trustText + ".");
         }
         Candidate b = best.get();
         String why = b.why() + others + "; " + signText + trustText;
+        String unexamined = String.join(", ", unassessed.stream().map(HyperviscosityVerdict::signName).toList());
         if (b.assessment() == Assessment.UNLIKELY && !unassessed.isEmpty()) {
             return new HyperviscosityVerdict(Assessment.NOT_ASSESSABLE, b.route(), signs, unassessed, trust,
-                    unassessed, "not decided: the values alone would make it unlikely, but these signs were not"
-                    + " examined and could change that: " + String.join(", ", unassessed) + ". " + why + ".");
+                    unassessed, "not decided: the values alone would make it unlikely, but these were not examined"
+                    + " and could change that: " + unexamined + ". " + upperFirst(why) + ".");
         }
         if (!unassessed.isEmpty()) {
-            why += "; not assessed: " + String.join(", ", unassessed);
+            why += "; not examined: " + unexamined;
         }
         return new HyperviscosityVerdict(b.assessment(), b.route(), signs, unassessed, trust, List.of(), why + ".");
+    }
+
+    private static String upperFirst(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     /** One way of reaching a hyperviscosity verdict, with its words. */
@@ -360,7 +365,9 @@ public final class Verdicts {
                 + Numbers.plain(rules.value(TLS_CHILD_BELOW_AGE, "a")) + ")"
                 : c.patient().ageYears().isPresent() ? "adult phosphate limit" : "adult phosphate limit (age unknown)";
         String reason = laboratory.isEmpty()
-                ? "only " + present + " of the 4 laboratory values present; at least 2 are needed to decide."
+                ? (present == 0 ? "none of the four laboratory values (uric acid, potassium, phosphate, calcium) was"
+                + " measured; at least two are needed to decide." : "only one of the four laboratory values was"
+                + " measured; at least two are needed to decide.")
                 : met + " of 4 criteria met (" + present + " present, " + phosphate + ")"
                         + (dependsOnUnconfirmed ? "; met only if the potassium is confirmed on a whole-blood sample"
                         : "")
@@ -387,7 +394,9 @@ public final class Verdicts {
                     : "time window not confirmed: day " + offset + " from the start of therapy (" + start.get()
                             + ") is outside " + before + " days before to " + after + " days after.";
         }
-        return new TumorLysisVerdict(laboratory, clinical, criteria, confirmed, window, reason, dependsOnUnconfirmed);
+        boolean applies = c.condition().leukemia() != Leukemia.NONE || start.isPresent() || present > 0;
+        return new TumorLysisVerdict(applies, laboratory, clinical, criteria, confirmed, window, reason,
+                dependsOnUnconfirmed);
     }
 
     /**

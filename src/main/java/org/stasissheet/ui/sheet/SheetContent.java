@@ -15,6 +15,7 @@ import org.stasissheet.flow.WhatIf;
 import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Estimate;
 import org.stasissheet.measure.Numbers;
+import org.stasissheet.measure.UnitSymbols;
 import org.stasissheet.report.VerdictWords;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
@@ -74,7 +75,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
             flags = List.copyOf(flags);
         }
 
-        /** "[!!!] ACT NOW · 2 flags". */
+        /** "●●● ACT NOW · 2 flags". */
         public String heading() {
             return level.badge() + " · " + flags.size() + (flags.size() == 1 ? " flag" : " flags");
         }
@@ -107,7 +108,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
 
     public static SheetContent of(Worksheet ws, List<String> leftOut) {
         Provenance p = ws.ruleSet();
-        String badge = "Rule set " + p.name() + " " + p.version() + " · sha256 " + p.shortHash() + "…";
+        String badge = "Rule set " + p.name() + " " + p.version();
         ApheresisPlan plan = ws.apheresis();
         return new SheetContent(Optional.of(ws), leftOut, List.of(), badge, p.local(), verdicts(ws), flagGroups(ws),
                 flow(ws.flow()), volumes(plan), exchanges(plan), leukapheresis(plan), plan.notes(), inputs(ws));
@@ -117,33 +118,40 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         HyperviscosityVerdict hv = ws.hyperviscosity();
         List<String> hvLines = new ArrayList<>();
         hvLines.add(hv.reason());
-        hvLines.add("Rests on: " + words(hv.route().code()));
-        if (!hv.unassessed().isEmpty()) {
-            hvLines.add("Not assessed (never counted as reassuring): " + String.join(", ", hv.unassessed()));
-        }
-        boolean hvRaised = hv.assessment() == HyperviscosityVerdict.Assessment.LIKELY
-                || hv.assessment() == HyperviscosityVerdict.Assessment.POSSIBLE;
+        boolean hvRaised = hv.assessment().alarm() >= 1;
 
         LeukostasisVerdict lk = ws.leukostasis();
-        String lkWord = upper(words(lk.probability().code())) + lk.score().map(s -> " (score " + s + " of 3)").orElse("");
-        boolean lkRaised = lk.score().map(s -> s >= 1).orElse(false);
+        boolean lkRaised = lk.probability().alarm() >= 1;
 
         TumorLysisVerdict tl = ws.tumorLysis();
-        String tlWord = "LABORATORY " + upper(VerdictWords.laboratory(tl)) + "\nCLINICAL "
-                + upper(VerdictWords.clinical(tl));
-        List<String> tlLines = new ArrayList<>();
-        tlLines.add(tl.reason());
-        for (TumorLysisVerdict.Criterion c : tl.criteria()) {
-            tlLines.add((c.met() ? "MET: " : "not met: ") + c.analyte().label()
-                    + c.value().map(q -> " " + Numbers.rounded(q.value(), 4) + " " + q.unit()).orElse("") + " · " + c.how());
+        VerdictCard tlCard;
+        if (tl.applies()) {
+            String tlWord = "LABORATORY " + upper(VerdictWords.laboratory(tl)) + "\nCLINICAL "
+                    + upper(VerdictWords.clinical(tl));
+            List<String> tlLines = new ArrayList<>();
+            tlLines.add(tl.reason());
+            for (TumorLysisVerdict.Criterion c : tl.criteria()) {
+                tlLines.add(upperFirst(VerdictWords.criterion(c)) + ": " + c.analyte().label()
+                        + c.value().map(q -> " " + Numbers.rounded(q.value(), 4) + " " + UnitSymbols.of(q.unit())
+                        + " · " + c.how()).orElse(""));
+            }
+            tlLines.add(tl.window());
+            tlCard = new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", tlWord, tl.laboratory().orElse(false),
+                    tlLines);
+        } else {
+            tlCard = new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", "NOT CHECKED", false,
+                    List.of(upperFirst(TumorLysisVerdict.NOT_CHECKED) + "."));
         }
-        tlLines.add(tl.window());
-        boolean tlRaised = tl.laboratory().orElse(false);
         return List.of(
-                new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(words(hv.assessment().code())),
+                new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(VerdictWords.hyperviscosity(hv)),
                         hvRaised, hvLines),
-                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", lkWord, lkRaised, List.of(lk.reason())),
-                new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", tlWord, tlRaised, tlLines));
+                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", upper(VerdictWords.leukostasis(lk)),
+                        lkRaised, List.of(lk.reason())),
+                tlCard);
+    }
+
+    private static String upperFirst(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     static List<FlagGroup> flagGroups(Worksheet ws) {
@@ -242,9 +250,6 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     }
 
 
-    private static String words(String code) {
-        return code.replace('-', ' ');
-    }
 
     private static String upper(String s) {
         return s.toUpperCase(Locale.ROOT);

@@ -12,7 +12,6 @@ import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.stasissheet.rules.Basis;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.ui.chart.FlowChartModel;
 import org.stasissheet.ui.chart.FlowChartView;
@@ -102,7 +101,7 @@ public final class SheetView {
     private static Node verdict(SheetContent.VerdictCard v) {
         Label title = new Label(v.title());
         title.getStyleClass().add("verdict-title");
-        Label word = new Label((v.raised() ? "▲ " : "· ") + v.word());
+        Label word = new Label((v.raised() ? "● " : "○ ") + v.word());
         word.setWrapText(true);
         word.setId("verdict-" + v.id() + "-word");
         word.getStyleClass().add("verdict-word");
@@ -137,11 +136,11 @@ public final class SheetView {
                 explanation.setWrapText(true);
                 Label source = new Label("Source: " + f.source());
                 source.setWrapText(true);
-                Label basis = new Label("Basis: " + basisWords(f.basis()) + "   ·   rule " + f.id());
+                Label basis = new Label("Basis: " + f.basis().words() + "   ·   rule " + f.id());
                 basis.getStyleClass().add("flag-basis");
                 VBox detail = new VBox(3, explanation, source, basis);
                 // A wrapping title and a details toggle instead of a titled pane: nothing is cut off.
-                Label title = new Label("[" + g.level().symbol() + "] " + g.level().word() + ": " + f.title());
+                Label title = new Label(g.level().badge() + ": " + f.title());
                 title.setWrapText(true);
                 title.getStyleClass().add("flag-title");
                 javafx.scene.control.ToggleButton more = new javafx.scene.control.ToggleButton("source and basis");
@@ -165,14 +164,6 @@ public final class SheetView {
         }
     }
 
-    static String basisWords(Basis b) {
-        return switch (b) {
-            case PUBLISHED -> "published";
-            case PUBLISHED_SECONDARY -> "published, quoted by a later source";
-            case COMMON_PRACTICE -> "common practice (no single source)";
-            case FROM_MEMORY -> "FROM MEMORY, not verified against the source";
-        };
-    }
 
     private void showApheresis(SheetContent c) {
         apheresis.getChildren().clear();
