@@ -50,7 +50,7 @@ public final class TriageSummary {
         line(sb, COLUMNS);
         for (TriageRow r : ranked(rows)) {
             line(sb, List.of(r.file(), r.patient(), r.status().code(),
-                    r.highestLevel().map(Level::badge).orElse(r.status() == TriageRow.Status.OK ? "none" : "unknown"),
+                    r.highestLevel().map(Level::word).orElse(r.status() == TriageRow.Status.OK ? "none" : "unknown"),
                     r.hyperviscosity(), r.leukostasis(), r.tumorLysis(), r.topFlag(), r.pdf(), r.message()));
         }
         return sb.toString();

@@ -60,6 +60,10 @@ public final class VerdictWords {
                 ? ", if the potassium is confirmed" : "");
     }
 
+    public static String upperFirst(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+
     static String yesNo(Optional<Boolean> b) {
         return b.map(v -> v ? "yes" : "no").orElse("cannot be decided (too few values)");
     }

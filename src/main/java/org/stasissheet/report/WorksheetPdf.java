@@ -392,7 +392,7 @@ public final class WorksheetPdf {
         int lines = 0;
         boolean first = true;
         for (String caution : sheet.cautions()) {
-            String text = first ? "[!] CAUTION  " + caution : caution;
+            String text = first ? "CAUTION  " + caution : caution;
             BaseFont f = first ? PdfFonts.bold() : PdfFonts.regular();
             lines += (int) Math.ceil(f.getWidthPoint(PdfFonts.printable(text), CAUTION_SIZE) * 1.05 / width);
             first = false;
@@ -433,7 +433,7 @@ public final class WorksheetPdf {
             ct.setSimpleColumn(left + 5, bottom + 2, right - 5, top - 3);
             Paragraph p = new Paragraph();
             p.setLeading(CAUTION_LEADING);
-            p.add(new Chunk("[!] CAUTION  ", font(PdfFonts.bold(), CAUTION_SIZE)));
+            p.add(new Chunk("CAUTION  ", font(PdfFonts.bold(), CAUTION_SIZE)));
             boolean first = true;
             for (String caution : sheet.cautions()) {
                 if (!first) {

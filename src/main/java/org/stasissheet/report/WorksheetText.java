@@ -47,10 +47,10 @@ public final class WorksheetText {
     static void verdicts(StringBuilder sb, Worksheet sheet) {
         sb.append("VERDICTS").append(NL);
         HyperviscosityVerdict hv = sheet.hyperviscosity();
-        sb.append("  Hyperviscosity: ").append(VerdictWords.hyperviscosity(hv)).append(NL);
+        sb.append("  ").append(VerdictWords.upperFirst(VerdictWords.hyperviscosity(hv))).append(NL);
         sb.append("    ").append(hv.reason()).append(NL);
         LeukostasisVerdict lk = sheet.leukostasis();
-        sb.append("  Leukostasis: ").append(VerdictWords.leukostasis(lk)).append(NL);
+        sb.append("  ").append(VerdictWords.upperFirst(VerdictWords.leukostasis(lk))).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
         TumorLysisVerdict tl = sheet.tumorLysis();
         if (!tl.applies()) {
@@ -84,8 +84,8 @@ public final class WorksheetText {
             for (Flag f : group) {
                 sb.append("    ").append(level.symbol()).append(' ').append(f.title()).append(NL);
                 sb.append("        ").append(f.explanation()).append(NL);
-                sb.append("        source: ").append(f.source()).append(" (").append(f.basis().code()).append(")")
-                        .append("  id: ").append(f.id()).append(NL);
+                sb.append("        source and basis: ").append(f.source()).append(" (").append(f.basis().words())
+                        .append(")  rule ").append(f.id()).append(NL);
             }
         }
         sb.append(NL);

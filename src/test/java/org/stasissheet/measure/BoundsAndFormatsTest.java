@@ -41,9 +41,13 @@ class BoundsAndFormatsTest {
     }
 
     @Test
-    @DisplayName("a quantity prints as its plain number and unit code")
+    @DisplayName("a quantity prints for people: its plain number and the unit's symbol, never a raw UCUM code")
     void quantity_toString() {
         assertEquals("5.6 cP", new Quantity(5.6, "cP").toString());
-        assertEquals("150000 /uL", new Quantity(150_000, "/uL").toString());
+        assertEquals("150000 /µL", new Quantity(150_000, "/uL").toString());
+        assertEquals("182 ×10⁹/L", new Quantity(182, "10*9/L").toString());
+        assertEquals("37 °C", new Quantity(37, "Cel").toString());
+        assertEquals("3.4 relative to water", new Quantity(3.4, "{rel}").toString());
+        assertEquals("0.76", new Quantity(0.76, "1").toString());
     }
 }

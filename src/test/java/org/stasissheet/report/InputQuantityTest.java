@@ -19,8 +19,8 @@ class InputQuantityTest {
             assertEquals(0.22, Double.parseDouble(ucum.convert(new Decimal("22"), "%", "1").asDecimal()), 1e-12);
         }
         assertEquals("0.22 (fraction)", WorksheetText.format(new Quantity(0.22, "1")));
-        assertEquals("182 10*9/L", WorksheetText.format(new Quantity(182, "10*9/L")));
-        assertEquals("541.3 umol/L", WorksheetText.format(new Quantity(541.3, "umol/L")));
+        assertEquals("182 ×10⁹/L", WorksheetText.format(new Quantity(182, "10*9/L")));
+        assertEquals("541.3 µmol/L", WorksheetText.format(new Quantity(541.3, "umol/L")));
         assertEquals("22 %", WorksheetText.format(new Quantity(22, "%")));
         assertEquals(WorksheetText.format(new Quantity(0.22, "1")), WorksheetPdf.quantity(new Quantity(0.22, "1")));
     }

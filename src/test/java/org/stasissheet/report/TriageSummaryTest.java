@@ -69,7 +69,7 @@ class TriageSummaryTest {
         String[] lines = csv.split("\r\n", -1);
         assertEquals(4, lines.length, csv); // header, two rows, and the empty string after the last CRLF
         assertEquals(String.join(",", TriageSummary.COLUMNS), lines[0]);
-        assertTrue(lines[1].startsWith("a.json,,ok,[!!!] ACT NOW,"), lines[1]);
+        assertTrue(lines[1].startsWith("a.json,,ok,ACT NOW,"), lines[1]);
         assertEquals("b.json,,error,unknown,,,,,,\"labs.wbc: \"\"abc\"\" is not a number\"", lines[2]);
         assertEquals("", lines[3]);
     }

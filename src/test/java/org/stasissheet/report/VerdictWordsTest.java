@@ -16,7 +16,7 @@ class VerdictWordsTest {
     // Novotny et al., Eur J Haematol 2005, as quoted by Piccirillo et al., Am J Hematol 2009 (DOMAIN.md §2).
     @ParameterizedTest(name = "score {0} -> {1}")
     @CsvSource({
-        "0, no organ sign of leukostasis graded (score 0)",
+        "0, leukostasis: no organ sign graded (score 0); re-examine",
         "1, leukostasis possible (score 1)",
         "2, leukostasis probable (score 2)",
         "3, leukostasis highly probable (score 3)",
@@ -33,6 +33,6 @@ class VerdictWordsTest {
     void notAssessable() {
         LeukostasisVerdict v = new LeukostasisVerdict(false, LeukostasisVerdict.Gate.NO_COUNT, Optional.empty(),
                 Probability.NOT_ASSESSABLE, java.util.List.of(), "test");
-        assertEquals("leukostasis not assessable", VerdictWords.leukostasis(v));
+        assertEquals("leukostasis: cannot be decided (no white cell count)", VerdictWords.leukostasis(v));
     }
 }

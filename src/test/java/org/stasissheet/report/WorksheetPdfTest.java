@@ -26,6 +26,7 @@ import org.stasissheet.measure.Numbers;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.Level;
 import org.stasissheet.worksheet.Cautions;
+import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.worksheet.Worksheet;
 
 class WorksheetPdfTest {
@@ -317,7 +318,10 @@ class WorksheetPdfTest {
                 assertTrue(text.contains(VerdictWords.hyperviscosity(sheet.hyperviscosity())), text);
                 assertTrue(text.contains(VerdictWords.leukostasis(sheet.leukostasis())), text);
                 assertTrue(text.contains("Tumor lysis"), text);
-                assertTrue(text.contains("laboratory " + VerdictWords.yesNo(sheet.tumorLysis().laboratory()).split(" ")[0]), text);
+                // the invented IgM case has no leukemia, no therapy and no tumor-lysis value: one quiet line
+                assertFalse(sheet.tumorLysis().applies());
+                assertTrue(text.contains(squash(TumorLysisVerdict.NOT_CHECKED)), text);
+                assertFalse(text.contains("only 0 of the 4"), text);
             }
         }
     }

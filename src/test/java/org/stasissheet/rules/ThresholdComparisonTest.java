@@ -74,11 +74,11 @@ class ThresholdComparisonTest {
     }
 
     @Test
-    @DisplayName("a threshold describes itself with its unit and parameter, and without the unit 1")
+    @DisplayName("a threshold describes itself with its unit symbol, never its parameter id, and without the unit 1")
     void describe() {
-        assertEquals("4 cP (hyperviscosity.sv)",
+        assertEquals("4 cP",
                 new Threshold(new Quantity(4, "cP"), List.of(), Optional.of("hyperviscosity.sv")).describe());
         assertEquals("0.45", Threshold.literal(new Quantity(0.45, "1")).describe());
-        assertEquals("100 10*9/L", Threshold.literal(new Quantity(100, "10*9/L")).describe());
+        assertEquals("100 ×10⁹/L", Threshold.literal(new Quantity(100, "10*9/L")).describe());
     }
 }

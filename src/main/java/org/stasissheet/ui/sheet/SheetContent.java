@@ -131,7 +131,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
             List<String> tlLines = new ArrayList<>();
             tlLines.add(tl.reason());
             for (TumorLysisVerdict.Criterion c : tl.criteria()) {
-                tlLines.add(upperFirst(VerdictWords.criterion(c)) + ": " + c.analyte().label()
+                tlLines.add(VerdictWords.upperFirst(VerdictWords.criterion(c)) + ": " + c.analyte().label()
                         + c.value().map(q -> " " + Numbers.rounded(q.value(), 4) + " " + UnitSymbols.of(q.unit())
                         + " · " + c.how()).orElse(""));
             }
@@ -140,7 +140,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                     tlLines);
         } else {
             tlCard = new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", "NOT CHECKED", false,
-                    List.of(upperFirst(TumorLysisVerdict.NOT_CHECKED) + "."));
+                    List.of(VerdictWords.upperFirst(TumorLysisVerdict.NOT_CHECKED) + "."));
         }
         return List.of(
                 new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(VerdictWords.hyperviscosity(hv)),
@@ -150,9 +150,6 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 tlCard);
     }
 
-    private static String upperFirst(String s) {
-        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
-    }
 
     static List<FlagGroup> flagGroups(Worksheet ws) {
         List<FlagGroup> groups = new ArrayList<>();
