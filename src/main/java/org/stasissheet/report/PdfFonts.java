@@ -21,6 +21,7 @@ final class PdfFonts {
      */
     static String printable(String text) {
         StringBuilder sb = null;
+        boolean inExponent = false;
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);
             char plain = plainDigit(c);
@@ -28,9 +29,18 @@ final class PdfFonts {
                 if (sb == null) {
                     sb = new StringBuilder(text.substring(0, i));
                 }
+                // a superscript without a glyph keeps its meaning as "^": "×10⁹/L" must never print as "×109/L"
+                boolean superscript = c < '\u2080' || c > '\u2089';
+                if (superscript && !inExponent) {
+                    sb.append('^');
+                }
+                inExponent = superscript;
                 sb.append(plain);
-            } else if (sb != null) {
-                sb.append(c);
+            } else {
+                inExponent = false;
+                if (sb != null) {
+                    sb.append(c);
+                }
             }
         }
         return sb == null ? text : sb.toString();

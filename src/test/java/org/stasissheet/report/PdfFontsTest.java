@@ -16,6 +16,13 @@ class PdfFontsTest {
         assertEquals("arterial O2 tension", PdfFonts.printable("arterial O₂ tension"));
         assertEquals("Ελένη · Анна", PdfFonts.printable("Ελένη · Анна"));
         assertEquals("µm ÷ ≥ –", PdfFonts.printable("µm ÷ ≥ –"));
+        // U+2079 SUPERSCRIPT NINE has no glyph either: an exponent keeps its caret, never reading as 109
+        assertFalse(PdfFonts.regular().charExists('\u2079'), "if the font gains the glyph, keep it");
+        assertEquals("WBC 6.1 ×10^9/L", PdfFonts.printable("WBC 6.1 ×10⁹/L"));
+        assertEquals("×10³/µL", PdfFonts.printable("×10³/µL"), "Latin-1 superscripts have glyphs");
+        // the level marks are our own dots, and the font has them
+        assertTrue(PdfFonts.regular().charExists('\u25CF') && PdfFonts.regular().charExists('\u25CB'));
+        assertTrue(PdfFonts.bold().charExists('\u25CF') && PdfFonts.bold().charExists('\u25CB'));
     }
 
     @Test
