@@ -1,17 +1,17 @@
 #!/bin/sh
 # Side-by-side start-up figures for Stasis Sheet, as ratios (machines differ; ratios travel):
-#   1. a cold `pdf` of a demo case through target/stasis   vs   a bare `java -version`   (target: <= 3x)
+#   1. a cold `pdf` of a demo case through target/stasis-sheet   vs   a bare `java -version`   (target: <= 3x)
 #   2. `triage` of 200 cases                                vs   one cold `pdf`           (target: <= 8x)
 # Prints both medians and the ratio of each pair. Uses hyperfine when it is installed, a timed loop otherwise.
 #
-#   mvn -q package -DskipTests && target/stasis --make-archive     # or: mvn -Pcds package -DskipTests
+#   mvn -q package -DskipTests && target/stasis-sheet --make-archive     # or: mvn -Pcds package -DskipTests
 #   sh src/bench/cold-start.sh [RUNS]                              # RUNS per command, default 15
 #
 # Environment: STASIS_BENCH_NO_HYPERFINE=1 forces the timed loop; JAVA_HOME picks the runtime for both sides.
 set -u
 root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
 runs=${1:-15}
-launcher="$root/target/stasis"
+launcher="$root/target/stasis-sheet"
 if [ -n "${JAVA_HOME:-}" ]; then java="$JAVA_HOME/bin/java"; else java=java; fi
 [ -x "$launcher" ] || { echo "no $launcher: run 'mvn -q package -DskipTests' first" >&2; exit 1; }
 demo=$(ls "$root"/samples/*.json 2>/dev/null | head -n 1)
@@ -73,7 +73,7 @@ if [ -z "${STASIS_BENCH_NO_HYPERFINE:-}" ] && command -v hyperfine >/dev/null 2>
 else
     tool="timed loop (date +%s%N)"
 fi
-if [ -f "$root/target/stasis.jsa" ]; then archive=present; else archive="absent (run target/stasis --make-archive)"; fi
+if [ -f "$root/target/stasis-sheet.jsa" ]; then archive=present; else archive="absent (run target/stasis-sheet --make-archive)"; fi
 
 echo "machine:  $(nproc) cores, $(awk -F: '/model name/ { sub(/^ +/, "", $2); print $2; exit }' /proc/cpuinfo 2>/dev/null), $(awk '/MemTotal/ { printf "%.0f GiB", $2 / 1048576 }' /proc/meminfo 2>/dev/null)"
 echo "java:     $("$java" -version 2>&1 | head -n 1)"

@@ -7,7 +7,7 @@ set -u
 root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
 work=$(mktemp -d "${TMPDIR:-/tmp}/stasis launcher.XXXXXX") || exit 1
 trap 'rm -rf "$work"' EXIT INT TERM
-cp -R "$root/target/stasis" "$root/target/stasis-sheet.jar" "$root/target/lib" "$work/" || exit 1
+cp -R "$root/target/stasis-sheet" "$root/target/stasis-sheet.jar" "$root/target/lib" "$work/" || exit 1
 demo=$(ls "$root"/samples/*.json | head -n 1)
 failed=0
 
@@ -20,7 +20,7 @@ check() {  # check NAME: the JSON worksheet must equal the reference, and the ru
     fi
 }
 
-rm -f "$work/stasis.jsa" "$work/stasis.jsa.size"
+rm -f "$work/stasis-sheet.jsa" "$work/stasis-sheet.jsa.size"
 reference=$("$work/stasis" assess --json "$demo") || { echo "FAIL: no reference output"; exit 1; }
 check "no archive"
 "$work/stasis" --make-archive assess "$demo" >/dev/null || { echo "FAIL: --make-archive"; exit 1; }
@@ -29,11 +29,11 @@ sleep 1; touch "$work/stasis-sheet.jar"
 check "archive older than the jar"
 "$work/stasis" --make-archive assess "$demo" >/dev/null
 # a half-written archive (an interrupted --make-archive by hand): the JVM itself would crash on it
-chmod u+w "$work/stasis.jsa"
-head -c 100000 "$work/stasis.jsa" > "$work/partial" && mv -f "$work/partial" "$work/stasis.jsa"
+chmod u+w "$work/stasis-sheet.jsa"
+head -c 100000 "$work/stasis-sheet.jsa" > "$work/partial" && mv -f "$work/partial" "$work/stasis-sheet.jsa"
 check "truncated archive"
-printf 'not an archive at all' > "$work/stasis.jsa"; wc -c < "$work/stasis.jsa" | tr -d ' ' > "$work/stasis.jsa.size"
+printf 'not an archive at all' > "$work/stasis-sheet.jsa"; wc -c < "$work/stasis-sheet.jsa" | tr -d ' ' > "$work/stasis-sheet.jsa.size"
 check "garbage archive of the recorded size"
-rm -f "$work/stasis.jsa.size"; "$work/stasis" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis.jsa.size"
+rm -f "$work/stasis-sheet.jsa.size"; "$work/stasis" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis-sheet.jsa.size"
 check "archive without its size record"
 exit $failed

@@ -15,7 +15,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code assess CASE [--json]}: reads one case and prints its worksheet. */
-@Command(name = "assess", mixinStandardHelpOptions = true,
+@Command(name = "assess",
         description = "Read one case (a case JSON file or a worksheet PDF) and print its worksheet.")
 final class AssessCommand implements Callable<Integer> {
     @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")

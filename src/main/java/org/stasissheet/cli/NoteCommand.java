@@ -14,7 +14,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code note CASE}: prints a short SBAR handoff, without the patient label unless asked. */
-@Command(name = "note", mixinStandardHelpOptions = true,
+@Command(name = "note",
         description = "Print a 3-20 line handoff note (situation, background, assessment, recommendation).")
 final class NoteCommand implements Callable<Integer> {
     @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")

@@ -16,7 +16,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code pdf CASE -o OUT.pdf}: writes the worksheet of one case as a PDF with the case embedded. */
-@Command(name = "pdf", mixinStandardHelpOptions = true,
+@Command(name = "pdf",
         description = "Write the worksheet of one case as a PDF (the case file is embedded in it).")
 final class PdfCommand implements Callable<Integer> {
     @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")

@@ -17,7 +17,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code rules check DIR} and {@code rules list [--basis B] [--markdown]}: look at a rule set without a case. */
-@Command(name = "rules", mixinStandardHelpOptions = true,
+@Command(name = "rules",
         description = "Validate or list a rule set.",
         subcommands = {RulesCommand.Check.class, RulesCommand.ListRules.class})
 final class RulesCommand implements Runnable {
@@ -29,7 +29,7 @@ final class RulesCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    @Command(name = "check", mixinStandardHelpOptions = true,
+    @Command(name = "check",
             description = "Validate the rule set in DIR; print counts by topic and basis (exit 2 if refused).")
     static final class Check implements Callable<Integer> {
         @Parameters(paramLabel = "DIR", description = "the rule folder (with manifest.yaml)")
@@ -57,7 +57,7 @@ final class RulesCommand implements Runnable {
         }
     }
 
-    @Command(name = "list", mixinStandardHelpOptions = true,
+    @Command(name = "list",
             description = "List the rules (id, level, title, source, basis) and parameters.")
     static final class ListRules implements Callable<Integer> {
         @Option(names = "--basis", paramLabel = "B",

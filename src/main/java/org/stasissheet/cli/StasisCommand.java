@@ -5,8 +5,7 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /** The top command: holds the subcommands and maps every outcome to an exit code. */
-@Command(name = "stasis",
-        mixinStandardHelpOptions = true,
+@Command(name = StasisCommand.NAME,
         versionProvider = StasisCommand.Version.class,
         description = "Sourced worksheet for hyperviscosity syndrome and leukostasis risk. "
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
@@ -14,6 +13,8 @@ import picocli.CommandLine.Command;
         subcommands = {AssessCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
                 RulesCommand.class})
 public final class StasisCommand implements Runnable {
+    /** The one program name: the jar, the launcher and every usage line. */
+    public static final String NAME = "stasis-sheet";
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -30,12 +31,14 @@ public final class StasisCommand implements Runnable {
 
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
         CommandLine cl = new CommandLine(new StasisCommand());
+        ownWords(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> report(ex, err));
         cl.setParameterExceptionHandler((ex, args2) -> {
-            err.println("stasis: " + ex.getMessage());
-            err.println("Run 'stasis " + ex.getCommandLine().getCommandName() + " --help' for usage.");
+            err.println(NAME + ": " + ex.getMessage());
+            err.println("For what '" + ex.getCommandLine().getCommandSpec().qualifiedName() + "' takes, run it with"
+                    + " --help.");
             return ExitCode.INVALID_INPUT;
         });
         try {
@@ -55,17 +58,40 @@ public final class StasisCommand implements Runnable {
             return ExitCode.INVALID_INPUT;
         }
         // An internal error: a short line, no stack trace, no patient data beyond the exception's own message.
-        err.println("stasis: internal error (" + ex.getClass().getSimpleName() + "): " + ex.getMessage());
+        err.println(NAME + ": internal error (" + ex.getClass().getSimpleName() + "): " + ex.getMessage());
         err.println("Nothing was written. Please report this with the command you ran.");
         err.flush();
         return ExitCode.INTERNAL_ERROR;
     }
 
-    /** Reads the version from the jar manifest, or "development" when run from classes. */
+    /**
+     * Our own help and version options and headings on every command of the tree (added here, once, rather than the
+     * library's stock ones): {@code -h/--help} everywhere, {@code --version} on the program itself.
+     */
+    static void ownWords(CommandLine cl) {
+        CommandLine.Model.CommandSpec spec = cl.getCommandSpec();
+        spec.addOption(CommandLine.Model.OptionSpec.builder("-h", "--help").usageHelp(true)
+                .description("show what this command does and what it takes").build());
+        if (cl.getParent() == null) {
+            spec.addOption(CommandLine.Model.OptionSpec.builder("--version").versionHelp(true)
+                    .description("print the program's version and the shipped rule set (name, version, SHA-256)")
+                    .build());
+        }
+        spec.usageMessage().synopsisHeading("Run as: ").parameterListHeading("Takes:%n")
+                .optionListHeading("Options:%n").commandListHeading("Commands:%n");
+        cl.getSubcommands().values().forEach(StasisCommand::ownWords);
+    }
+
+    /** The program's version (from the jar manifest, or "development") and the shipped rule set it carries. */
     static final class Version implements CommandLine.IVersionProvider {
         @Override
         public String[] getVersion() {
-            return new String[] {"Stasis Sheet " + ToolVersion.get()};
+            org.stasissheet.rules.LoadResult shipped = org.stasissheet.files.RuleSources.shipped();
+            String rules = shipped instanceof org.stasissheet.rules.LoadResult.Loaded loaded
+                    ? "shipped rule set " + loaded.ruleSet().provenance().name() + " "
+                    + loaded.ruleSet().provenance().version() + ", SHA-256 " + loaded.ruleSet().provenance().sha256()
+                    : "the shipped rule set could not be read";
+            return new String[] {NAME + " " + ToolVersion.get(), rules};
         }
     }
 }

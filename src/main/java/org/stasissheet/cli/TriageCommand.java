@@ -32,7 +32,7 @@ import picocli.CommandLine.Spec;
  * {@code summary.csv}, most urgent first. One bad file never stops the batch; it gets a row saying what is wrong.
  * The rule set and the fonts are loaded once for the whole batch; nothing of one case is kept for the next.
  */
-@Command(name = "triage", mixinStandardHelpOptions = true,
+@Command(name = "triage",
         description = "Assess every case (*.json, *.pdf) in DIR: a PDF each in OUTDIR and OUTDIR/summary.csv, "
                 + "most urgent first.")
 final class TriageCommand implements Callable<Integer> {
