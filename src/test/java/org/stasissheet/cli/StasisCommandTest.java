@@ -26,11 +26,35 @@ class StasisCommandTest {
     }
 
     @Test
+    @DisplayName("help is in our own words under one program name; --version names the shipped rule set and its hash")
+    void ownWordsAndVersion() {
+        java.io.StringWriter out = new java.io.StringWriter();
+        for (String[] args : new String[][] {{"--help"}, {"assess", "--help"}, {"rules", "check", "--help"}}) {
+            out.getBuffer().setLength(0);
+            assertEquals(0, StasisCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true)));
+            String help = out.toString();
+            assertTrue(help.startsWith("Run as: stasis-sheet"), help);
+            assertFalse(help.contains("Show this help message and exit"), help);
+            assertFalse(help.contains("Usage:"), help);
+            assertFalse(help.contains("[-hV]"), help);
+        }
+        out.getBuffer().setLength(0);
+        assertEquals(0, StasisCommand.run(new String[] {"--version"}, new PrintWriter(out, true),
+                new PrintWriter(err, true)));
+        org.stasissheet.rules.RuleSet shipped = ((org.stasissheet.rules.LoadResult.Loaded)
+                org.stasissheet.files.RuleSources.shipped()).ruleSet();
+        assertTrue(out.toString().startsWith("stasis-sheet "), out.toString());
+        assertTrue(out.toString().contains(shipped.provenance().name() + " " + shipped.provenance().version()
+                + ", SHA-256 " + shipped.provenance().sha256()), out.toString());
+    }
+
+    @Test
     @DisplayName("an internal error prints one short line and exits 1")
     void internalError_isOneLine() {
         int code = StasisCommand.report(new IllegalStateException("boom"), new PrintWriter(err, true));
         assertEquals(ExitCode.INTERNAL_ERROR, code);
-        assertTrue(err.toString().startsWith("stasis: internal error (IllegalStateException): boom"), err.toString());
+        assertTrue(err.toString().startsWith("stasis-sheet: internal error (IllegalStateException): boom"),
+                err.toString());
         assertFalse(err.toString().contains("\tat "));
     }
 
