@@ -108,7 +108,7 @@ public final class WorksheetText {
     }
 
     /** The input's name for people; a baseline value says so. */
-    static String label(InputLine line) {
+    public static String label(InputLine line) {
         return line.path().startsWith("baseline.") ? line.label() + " (baseline)" : line.label();
     }
 
@@ -116,7 +116,7 @@ public final class WorksheetText {
      * A value with its unit symbol, as the inputs tables print it. UCUM's dimensionless unit "1" (a hematocrit as a
      * fraction) is written in words: "0.22 1" reads like a second number.
      */
-    static String format(Quantity q) {
+    public static String format(Quantity q) {
         String number = Numbers.rounded(q.value(), 4);
         return "1".equals(q.unit()) ? number + " (fraction)" : UnitSymbols.format(number, q.unit());
     }

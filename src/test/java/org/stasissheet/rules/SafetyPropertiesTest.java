@@ -34,7 +34,7 @@ import org.stasissheet.rules.Threshold.Comparison;
  * be replayed with {@code assess}. The value ranges are the analytes' plausible ranges, narrowed to where the
  * thresholds lie.
  */
-class SafetyPropertiesTest {
+public class SafetyPropertiesTest {
     static final int COUNT = Integer.getInteger("stasis.fuzz.count", 5_000);
     private static final RuleSet RULES = TestCases.SHIPPED;
 
@@ -56,7 +56,7 @@ class SafetyPropertiesTest {
         return r.nextInt(4) == 0 ? Optional.empty() : Optional.of(r.nextInt(4));
     }
 
-    static Case randomCase(Random r) {
+    public static Case randomCase(Random r) {
         Condition condition = new Condition(pick(r, Paraprotein.values()), pick(r, Leukemia.values()), r.nextBoolean(),
                 pick(r, Cryoglobulin.values()), r.nextInt(3) == 0 ? Optional.of(LocalDate.of(2026, 6, 10))
                 : Optional.empty());

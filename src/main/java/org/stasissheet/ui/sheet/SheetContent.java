@@ -17,6 +17,7 @@ import org.stasissheet.measure.Estimate;
 import org.stasissheet.measure.Numbers;
 import org.stasissheet.measure.UnitSymbols;
 import org.stasissheet.report.VerdictWords;
+import org.stasissheet.report.WorksheetText;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
@@ -221,19 +222,11 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     static List<Row> inputs(Worksheet ws) {
         List<Row> rows = new ArrayList<>();
         for (InputLine line : ws.inputs()) {
-            Optional<Analyte> analyte = Analyte.byKey(line.path().substring(line.path().lastIndexOf('.') + 1));
-            String entered = Numbers.rounded(line.entered().value(), 4) + " " + shownUnit(analyte, line.entered().unit());
-            String canonical = Numbers.rounded(line.canonical().value(), 4) + " "
-                    + shownUnit(analyte, line.canonical().unit());
-            rows.add(new Row(line.label() + " (" + line.path() + ")",
-                    line.entered().equals(line.canonical()) ? entered : entered + "  =  " + canonical));
+            String entered = WorksheetText.format(line.entered());
+            rows.add(new Row(WorksheetText.label(line), line.entered().equals(line.canonical()) ? entered
+                    : entered + "  =  " + WorksheetText.format(line.canonical())));
         }
         return rows;
-    }
-
-    /** The unit as clinicians write it (×10⁹/L, µmol/L), falling back to the UCUM code. */
-    private static String shownUnit(Optional<Analyte> analyte, String ucum) {
-        return analyte.flatMap(a -> a.unitOption(ucum)).map(u -> u.display()).orElse(ucum);
     }
 
     private static String value(Estimate<Double> e, String unit) {

@@ -1,0 +1,140 @@
+package org.stasissheet.report;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.OffsetDateTime;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.stasissheet.files.CaseFiles;
+import org.stasissheet.files.RuleSources;
+import org.stasissheet.intake.Case;
+import org.stasissheet.intake.CaseReader;
+import org.stasissheet.intake.CaseWriter;
+import org.stasissheet.rules.LoadResult;
+import org.stasissheet.rules.RuleSet;
+import org.stasissheet.rules.SafetyPropertiesTest;
+import org.stasissheet.ui.sheet.SheetContent;
+import org.stasissheet.worksheet.Assessor;
+import org.stasissheet.worksheet.Worksheet;
+
+/**
+ * What a clinician reads speaks one clinical vocabulary: the text worksheet, the handoff note, the PDF and the form's
+ * worksheet labels, for every demo case and for generated cases. Rule ids, case-file keys and hashes belong only in
+ * the "source and basis" lines and the provenance; UCUM codes only in files and JSON.
+ */
+class PlainWordsTest {
+    private static final RuleSet RULES = ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
+
+    /** A rule or parameter id, or a case-file key, inside a sentence. */
+    private static final Pattern CODE_IN_SENTENCE = Pattern.compile("\\b(hyperviscosity|leukostasis|hyperleukocytosis"
+            + "|tumorLysis|artefact|apheresis|apl|hyperkalaemia|exchange|leukocrit|transfusion|labs|findings|patient"
+            + "|condition|plan|baseline)\\.[a-zA-Z]");
+    /** A UCUM code where a unit symbol belongs. */
+    private static final Pattern UCUM_IN_PROSE = Pattern.compile("10\\*|\\{rel}|umol|\\bum\\b|mm\\[Hg]|/uL|mPa\\.s"
+            + "|\\bmeq/");
+    private static final Pattern OLD_MARKS = Pattern.compile("\\[!!!]|\\[!]|\\[i]|▲");
+
+    static List<Case> cases() throws IOException {
+        List<Case> cases = new ArrayList<>();
+        try (Stream<Path> samples = Files.list(Path.of("samples"))) {
+            for (Path p : samples.filter(p -> p.toString().endsWith(".json")).sorted().toList()) {
+                cases.add(((CaseReader.Accepted) CaseFiles.read(p)).c());
+            }
+        }
+        Random r = new Random(2026L);
+        for (int i = 0; i < 150; i++) {
+            cases.add(SafetyPropertiesTest.randomCase(r));
+        }
+        return cases;
+    }
+
+    /** The lines a person reads as sentences: source-and-basis lines and the provenance are left out. */
+    private static List<String> sentences(String text) {
+        List<String> out = new ArrayList<>();
+        boolean provenance = false;
+        for (String line : text.split("\\R")) {
+            if (line.trim().equalsIgnoreCase("Provenance") || line.startsWith("Rule set:")) {
+                provenance = true;
+            }
+            if (provenance || line.contains("source and basis:") || line.contains(" · rule ")
+                    || line.contains("basis: ")) {
+                continue;
+            }
+            out.add(line);
+        }
+        return out;
+    }
+
+    private static void check(String where, String text, List<String> problems) {
+        for (String line : sentences(text)) {
+            for (Pattern p : List.of(CODE_IN_SENTENCE, UCUM_IN_PROSE, OLD_MARKS)) {
+                Matcher m = p.matcher(line);
+                if (m.find()) {
+                    problems.add(where + ": '" + m.group() + "' in: " + line.trim());
+                }
+            }
+            if (line.toLowerCase(java.util.Locale.ROOT).contains("not assessable")) {
+                problems.add(where + ": 'not assessable' in: " + line.trim());
+            }
+        }
+    }
+
+    private static String form(SheetContent s) {
+        StringBuilder sb = new StringBuilder();
+        s.verdicts().forEach(v -> sb.append(v.title()).append('\n').append(v.word()).append('\n')
+                .append(String.join("\n", v.lines())).append('\n'));
+        s.flagGroups().forEach(g -> {
+            sb.append(g.heading()).append('\n');
+            g.flags().forEach(f -> sb.append(f.title()).append('\n').append(f.explanation()).append('\n'));
+        });
+        s.volumes().forEach(r -> sb.append(r.label()).append(' ').append(r.value()).append('\n'));
+        s.leukapheresis().forEach(r -> sb.append(r.label()).append(' ').append(r.value()).append('\n'));
+        s.inputs().forEach(r -> sb.append(r.label()).append(' ').append(r.value()).append('\n'));
+        s.apheresisNotes().forEach(n -> sb.append(n).append('\n'));
+        sb.append(s.ruleSetBadge()).append('\n');
+        return sb.toString();
+    }
+
+    @Test
+    @DisplayName("text worksheet, handoff note and the form's worksheet speak plain clinical words")
+    void textNoteAndForm() throws IOException {
+        List<String> problems = new ArrayList<>();
+        int i = 0;
+        for (Case c : cases()) {
+            Worksheet ws = Assessor.assess(c, RULES);
+            String name = "case " + i++;
+            check(name + " text", WorksheetText.render(ws), problems);
+            check(name + " note", HandoffNote.render(ws, true), problems);
+            check(name + " form", form(SheetContent.of(ws, List.of())), problems);
+        }
+        assertEquals(List.of(), problems.stream().distinct().limit(40).toList());
+    }
+
+    @Test
+    @DisplayName("the PDF's text speaks plain clinical words (every demo case and some generated ones)")
+    void pdfText() throws IOException {
+        List<String> problems = new ArrayList<>();
+        List<Case> cases = cases().subList(0, 14);
+        int i = 0;
+        for (Case c : cases) {
+            Worksheet ws = Assessor.assess(c, RULES);
+            byte[] pdf = WorksheetPdf.render(ws, PdfOptions.defaults("test"),
+                    OffsetDateTime.parse("2026-06-11T03:15:00+02:00"),
+                    CaseWriter.write(c).getBytes(StandardCharsets.UTF_8));
+            try (PdfProbe probe = new PdfProbe(pdf)) {
+                check("case " + i++ + " pdf", probe.allText(), problems);
+            }
+        }
+        assertEquals(List.of(), problems.stream().distinct().limit(40).toList());
+    }
+}
