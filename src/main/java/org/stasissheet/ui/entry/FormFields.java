@@ -72,7 +72,9 @@ public final class FormFields {
                 new Choice("", NOT_ENTERED), new Choice("none", "none"), new Choice("IgM", "IgM"),
                 new Choice("IgG", "IgG"), new Choice("IgG3", "IgG3 (enter the value under IgG)"),
                 new Choice("IgA", "IgA"))));
-        list.add(choice(c, "condition.leukemia", "Leukemia type", vocabulary(Leukemia.class, NOT_ENTERED)));
+        List<Choice> leukemias = new ArrayList<>(List.of(new Choice("", NOT_ENTERED)));
+        Arrays.stream(Leukemia.values()).forEach(l -> leukemias.add(new Choice(l.code(), l.words())));
+        list.add(choice(c, "condition.leukemia", "Leukemia type", leukemias));
         list.add(simple(c, "condition.monocytic", "AML with monocytic differentiation", FieldKind.SWITCH, ""));
         list.add(choice(c, "condition.cryoglobulin", "Cryoglobulin", vocabulary(Cryoglobulin.class, NOT_ENTERED)));
         list.add(simple(c, "condition.therapyStarted", "Therapy started on", FieldKind.DATE,
