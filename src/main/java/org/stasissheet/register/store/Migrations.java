@@ -8,6 +8,7 @@ import org.flywaydb.core.api.FlywayException;
 import org.flywaydb.core.api.MigrationInfo;
 import org.flywaydb.core.api.MigrationState;
 import org.flywaydb.core.api.logging.Log;
+import org.flywaydb.core.api.logging.LogCreator;
 import org.flywaydb.core.api.logging.LogFactory;
 
 /**
@@ -24,7 +25,7 @@ final class Migrations {
     }
 
     static void migrate(Connections connections) {
-        silenceFlyway();
+        LogFactory.setLogCreator(new Quiet());
         boolean sqlite = connections.isSqlite();
         RegisterLocation location = connections.location();
         String url = sqlite ? location.shown() : ((RegisterLocation.Postgres) location).url();
@@ -35,6 +36,7 @@ final class Migrations {
                 .placeholders(Map.of("id_column", sqlite ? "INTEGER PRIMARY KEY AUTOINCREMENT"
                         : "BIGINT GENERATED ALWAYS AS IDENTITY PRIMARY KEY"))
                 .table(HISTORY_TABLE)
+                .loggers(Quiet.class.getName())
                 .cleanDisabled(true)
                 .validateMigrationNaming(true)
                 .load();
@@ -72,12 +74,16 @@ final class Migrations {
         return line.length() > 300 ? line.substring(0, 300) + "…" : line;
     }
 
-    /** Flyway's progress lines are not the user's business; what matters reaches them as a message. */
-    private static void silenceFlyway() {
-        LogFactory.setLogCreator(type -> QUIET);
-    }
+    /**
+     * Flyway's progress lines are not the user's business; what matters reaches them as a message. Named to Flyway
+     * by class, so it replaces whatever logger Flyway would have picked.
+     */
+    public static final class Quiet implements LogCreator, Log {
+        @Override
+        public Log createLogger(Class<?> type) {
+            return this;
+        }
 
-    private static final Log QUIET = new Log() {
         @Override
         public void debug(String message) {
         }
@@ -101,5 +107,5 @@ final class Migrations {
         @Override
         public void notice(String message) {
         }
-    };
+    }
 }
