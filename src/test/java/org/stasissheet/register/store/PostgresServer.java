@@ -28,9 +28,9 @@ import org.junit.jupiter.api.Assumptions;
  * server runs as the {@code postgres} system user (made by the same package) through {@code runuser}.
  * Where no server can be started the tests are skipped, except under {@code CI=true}, where they fail.
  */
-final class PostgresServer implements AutoCloseable {
-    static final String OWNER = "stasis_owner";
-    static final String OWNER_PASSWORD = "owner-secret-for-tests";
+public final class PostgresServer implements AutoCloseable {
+    public static final String OWNER = "stasis_owner";
+    public static final String OWNER_PASSWORD = "owner-secret-for-tests";
     private static final AtomicInteger DATABASES = new AtomicInteger();
 
     private final Path bin;
@@ -45,7 +45,7 @@ final class PostgresServer implements AutoCloseable {
         this.asPostgresUser = asPostgresUser;
     }
 
-    static PostgresServer start() {
+    public static PostgresServer start() {
         Path bin = findBin();
         if (bin == null) {
             unavailable("no PostgreSQL server binaries (initdb, pg_ctl) found; install the postgresql package");
@@ -126,7 +126,7 @@ final class PostgresServer implements AutoCloseable {
     }
 
     /** A new, empty database on this server, for one test. */
-    String newDatabase() {
+    public String newDatabase() {
         String name = "register_" + DATABASES.incrementAndGet();
         try (Connection c = ownerConnection("postgres"); Statement st = c.createStatement()) {
             st.execute("CREATE DATABASE " + name);
@@ -137,15 +137,15 @@ final class PostgresServer implements AutoCloseable {
     }
 
     /** The URL a user would give with {@code --db}: no password in it. */
-    String url(String database, String user) {
+    public String url(String database, String user) {
         return "jdbc:postgresql://127.0.0.1:" + port + "/" + database + "?user=" + user;
     }
 
-    int port() {
+    public int port() {
         return port;
     }
 
-    Connection ownerConnection(String database) throws SQLException {
+    public Connection ownerConnection(String database) throws SQLException {
         Properties p = new Properties();
         p.setProperty("user", OWNER);
         p.setProperty("password", OWNER_PASSWORD);

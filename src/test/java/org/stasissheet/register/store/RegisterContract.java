@@ -230,6 +230,52 @@ abstract class RegisterContract {
         assertTrue(before.contains("referral " + id), before);
     }
 
+    @Test
+    @DisplayName("kill -9 of a writing process mid-batch, then reopen: every referral is whole, none is partial")
+    void killedWriter_leavesNoPartialReferral() throws Exception {
+        Optional<String> db = freshDb();
+        open(db);
+        List<String> command = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), RegisterWriterProcess.class.getName(), db.orElseThrow(),
+                temp.resolve("data").toString());
+        ProcessBuilder pb = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD);
+        pb.environment().putAll(environment());
+        Process writer = pb.start();
+        int seen = 0;
+        try (var lines = new java.io.BufferedReader(new java.io.InputStreamReader(writer.getInputStream(),
+                StandardCharsets.UTF_8))) {
+            while (seen < 25 && lines.readLine() != null) {
+                seen++;
+            }
+            // SIGKILL on POSIX: no shutdown hook, no finally block, no chance to tidy up
+            writer.destroyForcibly();
+            writer.waitFor();
+        }
+        assertEquals(25, seen, "the writer was adding referrals when it was killed");
+        Register after = open(db);
+        List<Referral> all = after.list(false);
+        assertTrue(all.size() >= 25, "every referral whose id was printed was committed: " + all.size());
+        try (Connection c = raw(db); Statement st = c.createStatement()) {
+            try (ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM referral r WHERE (SELECT COUNT(*) FROM "
+                    + "referral_event e WHERE e.referral_id = r.id AND e.what = 'received') <> 1")) {
+                rs.next();
+                assertEquals(0, rs.getInt(1), "every referral has exactly one received event");
+            }
+            try (ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM referral_event e WHERE NOT EXISTS "
+                    + "(SELECT 1 FROM referral r WHERE r.id = e.referral_id)")) {
+                rs.next();
+                assertEquals(0, rs.getInt(1), "no event without its referral");
+            }
+        }
+        for (Referral r : all) {
+            String sample = r.snapshot().highestLevel().equals(Optional.of(Level.ACT_NOW))
+                    ? RegisterFixtures.ACT_NOW_CASE : RegisterFixtures.REVIEW_CASE;
+            assertEquals(RegisterFixtures.caseJson(sample), r.snapshot().caseJson(), "referral " + r.id());
+        }
+        assertInstanceOf(DecisionOutcome.Recorded.class, after.decide(decision(all.get(0).id(), OptionalInt.empty(),
+                Decision.ACCEPTED, "Invented A")), "the register is usable after the crash");
+    }
+
     /** SQLite stores booleans as integers. */
     abstract String trueLiteral();
 
