@@ -23,6 +23,7 @@ import org.stasissheet.register.DecisionRequest;
 import org.stasissheet.register.NewReferral;
 import org.stasissheet.register.Procedure;
 import org.stasissheet.register.Referral;
+import org.stasissheet.register.RegisterAccess;
 import org.stasissheet.register.RegisterEvent;
 import org.stasissheet.register.RegisterTime;
 import org.stasissheet.register.Snapshot;
@@ -36,7 +37,7 @@ import org.stasissheet.rules.Provenance;
  * session state outlives a call. A decision is saved only on the version the decider saw (optimistic check);
  * every change appends history events, which the database itself refuses to change or remove.
  */
-public final class Register {
+public final class Register implements RegisterAccess {
     private static final String COLUMNS = "id, version, received_at, referrer, location, procedure_asked, "
             + "patient_label, case_json, rule_set_name, rule_set_version, rule_set_sha256, highest_level, "
             + "hyperviscosity, leukostasis, tumor_lysis, top_flag, decision, decided_by, decided_at, planned_slot, "
@@ -62,6 +63,7 @@ public final class Register {
     }
 
     /** The database as it may be shown (never with a password). */
+    @Override
     public String shown() {
         return connections.location().shown();
     }
@@ -111,6 +113,7 @@ public final class Register {
     }
 
     /** Every referral (or only the open ones), most urgent first, then the earliest received. */
+    @Override
     public List<Referral> list(boolean openOnly) {
         String where = openOnly ? " WHERE decision IN ('pending', 'deferred', 'more-information')" : "";
         List<Referral> out = inTransaction("list the referrals", c -> {
@@ -135,6 +138,7 @@ public final class Register {
     }
 
     /** A referral's events, oldest first; empty when there is no such referral. */
+    @Override
     public List<RegisterEvent> history(long id) {
         return inTransaction("read the history of referral " + id, c -> {
             List<RegisterEvent> events = new ArrayList<>();
@@ -156,6 +160,7 @@ public final class Register {
      * Records a decision if the referral is still what the decider saw: the version they name, or, when they
      * name none, still pending. Otherwise nothing is saved and the conflict says what it is now.
      */
+    @Override
     public DecisionOutcome decide(DecisionRequest request) {
         return inTransaction("record the decision on referral " + request.referralId(), c -> {
             Optional<Referral> found = read(c, request.referralId(), true);
@@ -199,6 +204,7 @@ public final class Register {
      * A number that changes whenever the register does (every change appends an event, and event ids only grow):
      * the form polls it to know when to reload.
      */
+    @Override
     public long changeStamp() {
         return inTransaction("read the register", c -> {
             try (Statement st = c.createStatement();
