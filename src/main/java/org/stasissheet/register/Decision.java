@@ -3,12 +3,13 @@ package org.stasissheet.register;
 import java.util.Arrays;
 import java.util.Optional;
 import java.util.stream.Collectors;
+import org.stasissheet.intake.Enums;
 
 /**
  * Where a referral stands with the apheresis team. A referral starts {@link #PENDING}; accepted and declined close
  * it; deferred and more-information keep it open, because someone still has to come back to it.
  */
-public enum Decision {
+public enum Decision implements Enums.Coded {
     PENDING("pending", true),
     ACCEPTED("accepted", false),
     DECLINED("declined", false),
@@ -23,6 +24,7 @@ public enum Decision {
         this.open = open;
     }
 
+    @Override
     public String code() {
         return code;
     }
@@ -33,7 +35,7 @@ public enum Decision {
     }
 
     public static Optional<Decision> fromCode(String code) {
-        return Arrays.stream(values()).filter(d -> d.code.equals(code)).findFirst();
+        return Enums.parse(Decision.class, code);
     }
 
     /** The words a person can record ({@code pending} is where a referral starts, never a decision). */

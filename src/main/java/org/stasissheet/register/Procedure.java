@@ -1,11 +1,10 @@
 package org.stasissheet.register;
 
-import java.util.Arrays;
 import java.util.Optional;
-import java.util.stream.Collectors;
+import org.stasissheet.intake.Enums;
 
 /** The procedure the referrer asked for; {@link #NOT_STATED} when the referral did not say. */
-public enum Procedure {
+public enum Procedure implements Enums.Coded {
     PLASMA_EXCHANGE("plasma-exchange", "plasma exchange"),
     LEUKAPHERESIS("leukapheresis", "leukapheresis"),
     NOT_STATED("not-stated", "not stated");
@@ -18,6 +17,7 @@ public enum Procedure {
         this.words = words;
     }
 
+    @Override
     public String code() {
         return code;
     }
@@ -27,10 +27,10 @@ public enum Procedure {
     }
 
     public static Optional<Procedure> fromCode(String code) {
-        return Arrays.stream(values()).filter(p -> p.code.equals(code)).findFirst();
+        return Enums.parse(Procedure.class, code);
     }
 
     public static String codes() {
-        return Arrays.stream(values()).map(Procedure::code).collect(Collectors.joining(" | "));
+        return Enums.allowed(Procedure.class);
     }
 }

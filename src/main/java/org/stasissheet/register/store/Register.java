@@ -16,6 +16,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.stasissheet.files.AtomicFiles;
 import org.stasissheet.files.FileWriteException;
+import org.stasissheet.intake.Enums;
 import org.stasissheet.register.Change;
 import org.stasissheet.register.Decision;
 import org.stasissheet.register.DecisionOutcome;
@@ -282,8 +283,7 @@ public final class Register implements RegisterAccess {
     }
 
     private static Referral referral(ResultSet rs) throws SQLException {
-        Optional<Level> level = java.util.Arrays.stream(Level.values())
-                .filter(l -> l.code().equals(text(rs, "highest_level"))).findFirst();
+        Optional<Level> level = Enums.parse(Level.class, text(rs, "highest_level"));
         Snapshot snapshot = new Snapshot(text(rs, "patient_label"), text(rs, "case_json"),
                 new Provenance(text(rs, "rule_set_name"), text(rs, "rule_set_version"), text(rs, "rule_set_sha256"),
                         false),
