@@ -58,6 +58,30 @@ class PostgresRegisterTest extends RegisterContract {
     }
 
     @Override
+    void assertSound(Optional<String> db) throws SQLException {
+        // PostgreSQL recovers on the server side; a killed client's session ends when the server sees the socket
+        // close, which may take a moment: wait up to 10 s for its transaction to be gone
+        int open = -1;
+        for (int i = 0; i < 100 && open != 0; i++) {
+            try (Connection c = raw(db); Statement st = c.createStatement();
+                 java.sql.ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM pg_stat_activity WHERE state LIKE "
+                         + "'idle in transaction%' AND datname = current_database()")) {
+                rs.next();
+                open = rs.getInt(1);
+            }
+            if (open != 0) {
+                try {
+                    Thread.sleep(100);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    break;
+                }
+            }
+        }
+        assertEquals(0, open, "no transaction of the killed writer is left open");
+    }
+
+    @Override
     String trueLiteral() {
         return "true";
     }

@@ -252,6 +252,7 @@ abstract class RegisterContract {
             writer.waitFor();
         }
         assertEquals(25, seen, "the writer was adding referrals when it was killed");
+        assertSound(db);
         Register after = open(db);
         List<Referral> all = after.list(false);
         assertTrue(all.size() >= 25, "every referral whose id was printed was committed: " + all.size());
@@ -275,6 +276,9 @@ abstract class RegisterContract {
         assertInstanceOf(DecisionOutcome.Recorded.class, after.decide(decision(all.get(0).id(), OptionalInt.empty(),
                 Decision.ACCEPTED, "Invented A")), "the register is usable after the crash");
     }
+
+    /** The database's own consistency check after a crash, where it has one. */
+    abstract void assertSound(Optional<String> db) throws SQLException;
 
     /** SQLite stores booleans as integers. */
     abstract String trueLiteral();

@@ -40,6 +40,16 @@ class SqliteRegisterTest extends RegisterContract {
     }
 
     @Override
+    void assertSound(Optional<String> db) throws SQLException {
+        try (Connection c = raw(db); Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("PRAGMA integrity_check")) {
+            // SQLite documents a single row "ok" for a database without corruption
+            rs.next();
+            assertEquals("ok", rs.getString(1));
+        }
+    }
+
+    @Override
     String trueLiteral() {
         return "1";
     }

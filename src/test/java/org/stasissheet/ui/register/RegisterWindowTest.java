@@ -20,6 +20,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListView;
 import javafx.scene.control.TableView;
 import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -80,7 +81,14 @@ class RegisterWindowTest {
         closed = r.add(referral("aml-breathless.json", T0.plusSeconds(60)));
         r.decide(new DecisionRequest(closed, OptionalInt.empty(), Decision.DECLINED,
                 new Referral.DecisionRecord("Invented consultant", T0.plusSeconds(120), Optional.empty(), "", "", "")));
-        window = RegisterWindow.open(stage, r, FormHarness.settings(data, new ScriptedShell()), Duration.ofMillis(200));
+        // a stage of its own: TestFX hands every test class the same primary stage, which other windows bind
+        window = RegisterWindow.open(new Stage(), r, FormHarness.settings(data, new ScriptedShell()),
+                Duration.ofMillis(200));
+    }
+
+    @AfterEach
+    void close() throws Exception {
+        FormHarness.fx(() -> window.stage().hide());
     }
 
     private void settle() {
