@@ -41,6 +41,24 @@ class ArchitectureTest {
             .should().dependOnClassesThat().resideInAnyPackage("javafx..")
             .because("the command line must run without loading JavaFX");
 
+    private static final String[] DATABASE = {"java.sql..", "javax.sql..", "org.flywaydb..", "org.sqlite..",
+        "org.postgresql.."};
+
+    @ArchTest
+    static final ArchRule onlyTheRegisterStoreKnowsTheDatabase = noClasses()
+            .that().resideOutsideOfPackage("org.stasissheet.register.store..")
+            .should().dependOnClassesThat().resideInAnyPackage(DATABASE)
+            .because("the JDBC and Flyway classes load only when a register command runs, and the core never "
+                    + "sees a database");
+
+    @ArchTest
+    static final ArchRule registerModelIsPure = noClasses().that().resideInAPackage("org.stasissheet.register")
+            .should().dependOnClassesThat().resideInAnyPackage("javafx..", "java.nio.file..", "java.io..",
+                    "org.stasissheet.register.store..", "org.stasissheet.cli..", "org.stasissheet.ui..",
+                    "org.stasissheet.files..")
+            .because("the register's records and rules are plain values; the store, the command line and the form "
+                    + "are adapters around them");
+
     @ArchTest
     static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")
             .because("patient data never leaves the machine");

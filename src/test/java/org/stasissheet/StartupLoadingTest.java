@@ -36,6 +36,27 @@ class StartupLoadingTest {
         assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("javafx.") || c.startsWith("com.sun.javafx.")
                 || c.startsWith("com.sun.glass.") || c.startsWith("com.sun.prism.")).toList());
         assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isPdfOrFont).toList());
+        assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isDatabase).toList(),
+                "only a register command loads the database classes");
+    }
+
+    @Test
+    @DisplayName("a register command loads the database classes (so the check above can see them), and no JavaFX or PDF")
+    void register_loadsDatabaseButNoToolkitOrPdf() throws Exception {
+        List<String> loaded = classesLoadedBy("register", "list", "--db",
+                "jdbc:sqlite:" + dir.resolve("register.sqlite"));
+        assertTrue(loaded.stream().anyMatch(c -> c.startsWith("org.flywaydb.")), "Flyway was loaded");
+        assertTrue(loaded.stream().anyMatch(c -> c.startsWith("org.sqlite.")), "the SQLite driver was loaded");
+        assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("org.postgresql.")).toList(),
+                "a SQLite register does not load the PostgreSQL driver");
+        assertEquals(List.of(), loaded.stream().filter(c -> c.startsWith("javafx.")).toList());
+        assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isPdfOrFont).toList());
+    }
+
+    /** (java.sql itself is not here: picocli touches a few java.sql types for its built-in converters.) */
+    static boolean isDatabase(String className) {
+        return className.startsWith("org.flywaydb.") || className.startsWith("org.sqlite.")
+                || className.startsWith("org.postgresql.") || className.startsWith("org.stasissheet.register.store.");
     }
 
     @Test

@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
@@ -51,6 +52,12 @@ final class TriageCommand implements Callable<Integer> {
     @Mixin
     RulesOption rules;
 
+    @Option(names = "--register", description = "also add every assessed referral to the referral register")
+    boolean register;
+
+    @Mixin
+    DatabaseOption db;
+
     @Spec
     CommandSpec spec;
 
@@ -61,6 +68,8 @@ final class TriageCommand implements Callable<Integer> {
         }
         List<Path> cases = caseFiles(dir);
         RuleSet ruleSet = Inputs.ruleSet(rules.dir());
+        // a register that cannot be opened stops the run before anything is written
+        ReferralSink sink = register ? RegisterRuns.sink(db.value(), RegisterRuns.actor(Optional.empty())) : null;
         createOutDir();
         PrintWriter err = spec.commandLine().getErr();
         PdfOptions options = layout.options();
@@ -69,9 +78,11 @@ final class TriageCommand implements Callable<Integer> {
         int n = 0;
         for (Path file : cases) {
             n++;
-            TriageRow row = triage(file, ruleSet, options, outputName(file, taken));
+            StringBuilder registered = new StringBuilder();
+            TriageRow row = triage(file, ruleSet, options, outputName(file, taken), sink, registered);
             rows.add(row);
-            err.println("[" + n + "/" + cases.size() + "] " + file.getFileName() + " " + row.status().code());
+            err.println("[" + n + "/" + cases.size() + "] " + file.getFileName() + " " + row.status().code()
+                    + registered);
             err.flush();
         }
         OutputFiles.write(outDir.resolve(SUMMARY), TriageSummary.csv(rows).getBytes(StandardCharsets.UTF_8));
@@ -83,19 +94,34 @@ final class TriageCommand implements Callable<Integer> {
         return ExitCode.DONE;
     }
 
-    private TriageRow triage(Path file, RuleSet ruleSet, PdfOptions options, String pdfName) {
+    private TriageRow triage(Path file, RuleSet ruleSet, PdfOptions options, String pdfName, ReferralSink sink,
+                             StringBuilder registered) {
         String name = file.getFileName().toString();
         try {
             Inputs.LoadedCase loaded = Inputs.loadCase(file);
             Worksheet sheet = Assessor.assess(loaded.value(), ruleSet);
             byte[] pdf = WorksheetPdf.render(sheet, options, OffsetDateTime.now(), loaded.json());
             OutputFiles.write(outDir.resolve(pdfName), pdf);
+            if (sink != null) {
+                registered.append(" (register: referral ").append(addToRegister(sink, loaded, sheet, pdfName))
+                        .append(')');
+            }
             return TriageRow.assessed(name, sheet, pdfName, options.includeIdentifiers());
         } catch (InvalidInputException e) {
             return TriageRow.failed(name, TriageRow.Status.ERROR, withoutFilePrefix(file, e.lines()));
         } catch (RuntimeException e) {
             return TriageRow.failed(name, TriageRow.Status.INTERNAL_ERROR,
                     "internal error (" + e.getClass().getSimpleName() + "): " + e.getMessage());
+        }
+    }
+
+    /** The worksheet is kept when the register refuses; the row then says the referral was not added. */
+    private static long addToRegister(ReferralSink sink, Inputs.LoadedCase loaded, Worksheet sheet, String pdfName) {
+        try {
+            return sink.add(new String(loaded.json(), StandardCharsets.UTF_8), sheet);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("the worksheet " + pdfName + " was written, but the referral was NOT "
+                    + "added to the register: " + String.join("; ", e.lines()));
         }
     }
 

@@ -60,7 +60,7 @@ public record TriageRow(String file, String patient, Status status, Optional<Lev
 
     /** A case that was assessed and whose worksheet PDF was written as {@code pdf}. */
     public static TriageRow assessed(String file, Worksheet sheet, String pdf, boolean withIdentifiers) {
-        Optional<Level> highest = sheet.flags().stream().map(Flag::level).min(Comparator.naturalOrder());
+        Optional<Level> highest = sheet.highestLevel();
         // flags come most urgent first; the first of the highest level is the top flag
         String top = sheet.flags().stream().min(Comparator.comparing(Flag::level)).map(Flag::title).orElse("");
         OptionalInt score = sheet.leukostasis().score().map(OptionalInt::of).orElse(OptionalInt.empty());

@@ -57,24 +57,6 @@ public final class TriageSummary {
     }
 
     private static void line(StringBuilder sb, List<String> cells) {
-        for (int i = 0; i < cells.size(); i++) {
-            if (i > 0) {
-                sb.append(',');
-            }
-            sb.append(cell(cells.get(i)));
-        }
-        sb.append("\r\n");
-    }
-
-    /** One CSV field: formula-guarded, then quoted when RFC 4180 requires it. */
-    static String cell(String value) {
-        String v = value;
-        if (!v.isEmpty() && "=+-@\t\r".indexOf(v.charAt(0)) >= 0) {
-            v = "'" + v;
-        }
-        if (v.indexOf(',') >= 0 || v.indexOf('"') >= 0 || v.indexOf('\n') >= 0 || v.indexOf('\r') >= 0) {
-            return '"' + v.replace("\"", "\"\"") + '"';
-        }
-        return v;
+        Csv.line(sb, cells);
     }
 }

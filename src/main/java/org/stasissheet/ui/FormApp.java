@@ -4,7 +4,7 @@ import java.time.Clock;
 import javafx.application.Application;
 import javafx.stage.Stage;
 import org.stasissheet.ui.app.CaseSession;
-import org.stasissheet.ui.app.DataFolder;
+import org.stasissheet.files.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
 import org.stasissheet.ui.app.MainWindow;

@@ -1,13 +1,16 @@
 package org.stasissheet.worksheet;
 
 import java.util.List;
+import java.util.Comparator;
 import java.util.Objects;
+import java.util.Optional;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.intake.Case;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
+import org.stasissheet.rules.Level;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.rules.TumorLysisVerdict;
 
@@ -34,5 +37,10 @@ public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs,
         Objects.requireNonNull(leukostasis, "leukostasis");
         Objects.requireNonNull(tumorLysis, "tumorLysis");
         flags = List.copyOf(flags);
+    }
+
+    /** The most urgent level among the flags; empty when nothing was flagged. */
+    public Optional<Level> highestLevel() {
+        return flags.stream().map(Flag::level).min(Comparator.naturalOrder());
     }
 }

@@ -35,13 +35,13 @@ class TriageSummaryTest {
     })
     @DisplayName("cells are RFC 4180 quoted and never start a spreadsheet formula")
     void cellEncoding(String raw, String encoded) {
-        assertEquals(encoded, TriageSummary.cell(raw));
+        assertEquals(encoded, Csv.cell(raw));
     }
 
     @Test
     @DisplayName("a line break inside a cell is kept inside quotes (RFC 4180 §2.6)")
     void lineBreakIsQuoted() {
-        assertEquals("\"line one\nline two\"", TriageSummary.cell("line one\nline two"));
+        assertEquals("\"line one\nline two\"", Csv.cell("line one\nline two"));
     }
 
     @Test

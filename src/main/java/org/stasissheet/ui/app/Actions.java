@@ -75,6 +75,11 @@ public final class Actions {
         return status.getReadOnlyProperty();
     }
 
+    /** Puts a message from another part of the form (the register launcher) in the status bar. */
+    void report(String message) {
+        status.set(message);
+    }
+
     /** The folder of the local protocol in use, empty for the shipped rule set. */
     public ObjectProperty<Optional<Path>> ruleFolderProperty() {
         return ruleFolder;

@@ -54,9 +54,11 @@ public final class MainWindow {
     private final Background background;
     private final ObjectProperty<Preferences> preferences;
     private final BorderPane root = new BorderPane();
+    private final FormSettings settings;
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
+        this.settings = Objects.requireNonNull(settings, "settings");
         PreferencesStore preferenceStore = new PreferencesStore(settings.dataFolder());
         preferences = new SimpleObjectProperty<>(this, "preferences", preferenceStore.load());
         drafts = new DraftStore(settings.dataFolder());
@@ -238,7 +240,13 @@ public final class MainWindow {
                 () -> actions.updatePreferences(preferences.get().withTextScale(1)));
         view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal);
 
-        MenuBar bar = new MenuBar(file, sheet, rules, view);
+        Menu register = new Menu("Re_gister");
+        register.setId("menu-register");
+        register.getItems().add(item("Open the referral _register…", "Shortcut+R", "action-register",
+                () -> org.stasissheet.ui.register.RegisterLauncher.open(settings, background,
+                        actions::report)));
+
+        MenuBar bar = new MenuBar(file, sheet, rules, register, view);
         bar.setId("menu-bar");
         return bar;
     }

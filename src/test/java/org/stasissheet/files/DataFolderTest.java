@@ -1,4 +1,4 @@
-package org.stasissheet.ui.app;
+package org.stasissheet.files;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

@@ -1,4 +1,4 @@
-package org.stasissheet.ui.app;
+package org.stasissheet.files;
 
 import java.nio.file.Path;
 import java.util.Locale;
@@ -7,8 +7,8 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * Where the form keeps the user's preferences and the autosaved draft: the system property
- * {@code stasis.dataDir} when set (tests point it at a temporary folder), else {@code %APPDATA%\stasis-sheet}
+ * Where the form keeps the user's preferences and the autosaved draft, and where the referral register's SQLite
+ * file lives by default: the system property {@code stasis.dataDir} when set (tests point it at a temporary folder), else {@code %APPDATA%\stasis-sheet}
  * on Windows, else {@code $XDG_DATA_HOME/stasis-sheet}, else {@code ~/.local/share/stasis-sheet}
  * (the XDG base directory convention).
  */
