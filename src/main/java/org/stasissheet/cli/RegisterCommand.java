@@ -14,7 +14,7 @@ import picocli.CommandLine.Model.CommandSpec;
  * {@code register ...}: the apheresis team's referral register. The options are plain values; the work (and the
  * database classes) live in {@link RegisterRuns}, loaded only when a register command runs.
  */
-@Command(name = "register", mixinStandardHelpOptions = true,
+@Command(name = "register",
         description = "The referral register: every referral, decision and change, with its history. "
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
                 + "and licensed practice.",
@@ -29,7 +29,7 @@ final class RegisterCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    @Command(name = "add", mixinStandardHelpOptions = true,
+    @Command(name = "add",
             description = "Assess CASE and add it to the register as a pending referral; prints the new id.")
     static final class Add implements Callable<Integer> {
         @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")
@@ -68,7 +68,7 @@ final class RegisterCommand implements Runnable {
         }
     }
 
-    @Command(name = "list", mixinStandardHelpOptions = true,
+    @Command(name = "list",
             description = "List referrals, most urgent first, then by received time.")
     static final class ListCommand implements Callable<Integer> {
         @Option(names = "--open", description = "only open referrals (pending, deferred, more-information)")
@@ -89,7 +89,7 @@ final class RegisterCommand implements Runnable {
         }
     }
 
-    @Command(name = "decide", mixinStandardHelpOptions = true,
+    @Command(name = "decide",
             description = "Record the team's decision on referral ID. Without --version it is recorded only while "
                     + "the referral is pending; to change a decision, name the version you looked at.")
     static final class Decide implements Callable<Integer> {
@@ -132,7 +132,7 @@ final class RegisterCommand implements Runnable {
         }
     }
 
-    @Command(name = "history", mixinStandardHelpOptions = true,
+    @Command(name = "history",
             description = "Print referral ID as it stands, what it was assessed with, and every change.")
     static final class History implements Callable<Integer> {
         @Parameters(paramLabel = "ID", description = "the referral's id")
@@ -150,7 +150,7 @@ final class RegisterCommand implements Runnable {
         }
     }
 
-    @Command(name = "export", mixinStandardHelpOptions = true,
+    @Command(name = "export",
             description = "Write every referral as RFC 4180 CSV, with hours from referral to decision and slot.")
     static final class Export implements Callable<Integer> {
         @Option(names = "--csv", required = true, paramLabel = "OUT", description = "the CSV file to write")
@@ -171,7 +171,7 @@ final class RegisterCommand implements Runnable {
         }
     }
 
-    @Command(name = "backup", mixinStandardHelpOptions = true,
+    @Command(name = "backup",
             description = "Write a consistent copy of the SQLite register to OUT (owner-only).")
     static final class Backup implements Callable<Integer> {
         @Parameters(paramLabel = "OUT", description = "the copy to write")
