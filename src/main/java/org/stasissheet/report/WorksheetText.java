@@ -11,6 +11,7 @@ import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.worksheet.InputLine;
+import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
 /** Renders a worksheet as plain text for the terminal: the same content as the JSON, for people. */
@@ -52,6 +53,7 @@ public final class WorksheetText {
         sb.append("  Leukostasis: ").append(lk.probability().code())
                 .append(lk.score().map(s -> " (score " + s + " of 3)").orElse("")).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
+        sb.append("    ! ").append(Cautions.GRADING_UNVERIFIED).append(NL);
         TumorLysisVerdict tl = sheet.tumorLysis();
         sb.append("  Tumor lysis (Cairo-Bishop): laboratory ").append(yesNo(tl.laboratory()))
                 .append(", clinical ").append(yesNo(tl.clinical())).append(NL);

@@ -25,6 +25,7 @@ import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.ui.chart.FlowChartModel;
 import org.stasissheet.ui.chart.FlowSeries;
 import org.stasissheet.worksheet.InputLine;
+import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
 /**
@@ -144,7 +145,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         return List.of(
                 new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(words(hv.assessment().code())),
                         hvRaised, hvLines),
-                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", lkWord, lkRaised, List.of(lk.reason())),
+                new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", lkWord, lkRaised, List.of(lk.reason(), Cautions.GRADING_UNVERIFIED)),
                 new VerdictCard("tumor-lysis", "Tumor lysis (Cairo–Bishop)", tlWord, tlRaised, tlLines));
     }
 
