@@ -25,9 +25,11 @@ public final class ApheresisPlanner {
     public static final List<Double> EXCHANGE_PLASMA_VOLUMES = List.of(1.0, 1.5, 2.0);
 
     public static final List<String> NOTES = List.of(
-            "Each exchange row gives two projections: right after the procedure (only the plasma was exchanged: "
-                    + "level × e^−V) and after the paraprotein outside the vessels has flowed back (level × "
-                    + "(1 − f·(1 − e^−V))). The truth at any moment lies between them; new synthesis is ignored.",
+            "Each exchange row gives two projections: " + ExchangeProjection.IMMEDIATE_LABEL + " (level × e^−V: "
+                    + "only the plasma was exchanged) and " + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT
+                    + " (level × (1 − f·(1 − e^−V)), f the intravascular fraction: "
+                    + ExchangeProjection.AFTER_REDISTRIBUTION_MEANING + "). The true level lies between them; new "
+                    + "synthesis is ignored.",
             "The serum viscosity after an exchange is a log-linear projection, an approximation; measure it again "
                     + "after the procedure and act on the patient, not on the projection.",
             "Blood and plasma volumes are formula estimates for adults, not measurements.");

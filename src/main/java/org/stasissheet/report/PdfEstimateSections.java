@@ -191,9 +191,6 @@ final class PdfEstimateSections {
             t.addCell(pdf.cell(orDash(r.serumViscosity(), x -> bothMoments(x, ""), reasons), pdf.body()));
         }
         doc.add(t);
-        doc.add(pdf.text("Right after: " + ExchangeProjection.IMMEDIATE_LABEL + " (level × e^−V). After "
-                + "redistribution: " + ExchangeProjection.AFTER_REDISTRIBUTION_MEANING
-                + " (level × (1 − f·(1 − e^−V))). The true level lies between them.", pdf.small()));
         for (String reason : reasons) {
             doc.add(pdf.text("— " + sentence(reason), pdf.small()));
         }

@@ -200,16 +200,13 @@ public final class SheetView {
                     cell(e.paraproteinAfterRedistribution(), "row-value"), cell(e.viscosityImmediate(), "row-value"),
                     cell(e.viscosityAfterRedistribution(), "row-value"));
         }
-        Label moments = cell("Right after: " + ExchangeProjection.IMMEDIATE_LABEL + " (level × e^−V). After "
-                + "redistribution: " + ExchangeProjection.AFTER_REDISTRIBUTION_MEANING
-                + " (level × (1 − f·(1 − e^−V))). The true level lies between them.", "apheresis-note");
         GridPane leuka = grid("leukapheresis");
         row = 0;
         for (SheetContent.Row r : c.leukapheresis()) {
             leuka.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
         }
         apheresis.getChildren().addAll(volumes, subheading("Plasma exchange: right after and after redistribution"),
-                exchange, moments, subheading("Leukapheresis"), leuka);
+                exchange, subheading("Leukapheresis"), leuka);
         c.apheresisNotes().forEach(n -> apheresis.getChildren().add(cell("NOTE: " + n, "apheresis-note")));
     }
 
