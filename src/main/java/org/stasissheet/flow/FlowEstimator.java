@@ -236,7 +236,8 @@ public final class FlowEstimator {
         double after = transfusedHematocrit(h, tbv, units, unitVolume, unitRedCells);
         List<String> assumptions = List.of(
                 units + " unit" + (units == 1 ? "" : "s") + " of " + Numbers.plain(unitVolume) + " L, each holding "
-                        + Numbers.plain(unitRedCells) + " L of red cells (from memory), mixed evenly into the "
+                        + Numbers.plain(unitRedCells) + " L of red cells (rule set; a middle figure for units in additive "
+                        + "solution), mixed evenly into the "
                         + "estimated blood volume of " + Numbers.rounded(tbv, 3) + " L (Nadler).",
                 "Hematocrit " + Numbers.rounded(h, 3) + " → " + Numbers.rounded(after, 3)
                         + ": (H × TBV + units × red-cell volume) ÷ (TBV + units × unit volume); an approximation "

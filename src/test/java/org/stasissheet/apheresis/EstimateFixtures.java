@@ -50,9 +50,12 @@ public final class EstimateFixtures {
         put(p, EstimateParameters.VOLUME_LYMPHOBLAST_HIGH, 250, "fL", "DOMAIN.md §2", Basis.FROM_MEMORY);
         put(p, EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_LOW, 154, "fL", "Costello 1980", Basis.PUBLISHED);
         put(p, EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_HIGH, 244, "fL", "Costello 1980", Basis.PUBLISHED);
-        // red-cell unit: from memory
-        put(p, EstimateParameters.TRANSFUSION_UNIT_VOLUME, 0.3, "L", "typical unit", Basis.FROM_MEMORY);
-        put(p, EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME, 0.18, "L", "typical unit", Basis.FROM_MEMORY);
+                // red cells in additive solution: 300–400 mL at hematocrit 55–65 % (Circular of Information, as quoted);
+        // the middle, 0.35 L at 0.60
+        put(p, EstimateParameters.TRANSFUSION_UNIT_VOLUME, 0.35, "L", "Circular of Information, as quoted",
+                Basis.PUBLISHED_SECONDARY);
+        put(p, EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME, 0.21, "L", "Circular of Information, as quoted",
+                Basis.PUBLISHED_SECONDARY);
         // intravascular fractions, Reverberi & Reverberi 2007 (IgM 78 % as quoted by a later review, DOMAIN.md §6)
         put(p, EstimateParameters.INTRAVASCULAR_FRACTION_IGM, 0.78, "1", "Reverberi 2007 as quoted",
                 Basis.PUBLISHED_SECONDARY);
