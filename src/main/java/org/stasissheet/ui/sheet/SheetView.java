@@ -7,6 +7,7 @@ import javafx.css.PseudoClass;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
@@ -186,6 +187,12 @@ public final class SheetView {
             volumes.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
         }
         GridPane exchange = grid("exchange-table");
+        // fixed shares, so that the short columns never collapse into one letter per line
+        for (double percent : new double[] {9, 10, 15, 16, 17, 16, 17}) {
+            ColumnConstraints column = new ColumnConstraints();
+            column.setPercentWidth(percent);
+            exchange.getColumnConstraints().add(column);
+        }
         exchange.addRow(0, cell("plasma volumes", "column-head"), cell("volume", "column-head"),
                 cell("intravascular left", "column-head"),
                 cell("paraprotein\n" + ExchangeProjection.IMMEDIATE_SHORT, "column-head"),
