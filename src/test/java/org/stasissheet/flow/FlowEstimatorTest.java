@@ -145,6 +145,18 @@ class FlowEstimatorTest {
         }
 
         @Test
+        @DisplayName("a local rule set whose volume range runs backwards gives a reason, not a number")
+        void backwardsRange() {
+            java.util.Map<String, org.stasissheet.rules.Parameter> p = new java.util.LinkedHashMap<>(rules.parameters());
+            String low = org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST_LOW;
+            p.put(low, new org.stasissheet.rules.Parameter(low, new org.stasissheet.measure.Quantity(300, "fL"),
+                    "invented local edit", org.stasissheet.rules.Basis.FROM_MEMORY, ""));
+            RuleSet edited = new RuleSet(rules.provenance(), rules.description(), p, rules.rules());
+            String why = FlowEstimator.cellVolume(Leukemia.ALL, edited).whyUnknown().orElseThrow();
+            assertTrue(why.contains("300 fL") && why.contains("needs 0 < low ≤ high"), why);
+        }
+
+        @Test
         @DisplayName("CML: no leukocrit estimate, because our reference gives no cell volume")
         void cml() {
             Case c = aCase().leukemia(Leukemia.CML).lab(Analyte.HEMATOCRIT, 0.3, "1")
