@@ -12,6 +12,7 @@ import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowPoint;
 import org.stasissheet.flow.Leukocrit;
 import org.stasissheet.flow.WhatIf;
+import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Estimate;
 
 /**
@@ -43,8 +44,10 @@ final class EstimatesJson {
             // CASE-FORMAT's key keeps its meaning: the level once the extravascular pool has flowed back
             number(r, rowReasons, "paraproteinAfterGPerL", row.paraproteinAfterGPerL());
             ObjectNode projected = r.putObject("projected");
-            projection(projected, rowReasons, "paraproteinGPerL", row.paraproteinGPerL(), "g/L");
-            projection(projected, rowReasons, "serumViscosity", row.serumViscosity(), "as reported by the laboratory");
+            // units as the course report writes them (COURSE-FORMAT): the catalogue's canonical units
+            projection(projected, rowReasons, "paraproteinGPerL", row.paraproteinGPerL(), Analyte.IGM.canonicalUnit());
+            projection(projected, rowReasons, "serumViscosity", row.serumViscosity(),
+                    Analyte.SERUM_VISCOSITY.canonicalUnit());
             r.set("reasons", rowReasons);
         }
         ObjectNode leuka = n.putObject("leukapheresis");

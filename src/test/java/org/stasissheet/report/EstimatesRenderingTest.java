@@ -43,6 +43,8 @@ class EstimatesRenderingTest {
         assertEquals(row.get("paraproteinAfterGPerL").asDouble(),
                 row.at("/projected/paraproteinGPerL/afterRedistribution").asDouble(), 0);
         assertEquals("g/L", row.at("/projected/paraproteinGPerL/unit").asText());
+        // the unit the course report contract writes for a projected viscosity (COURSE-FORMAT)
+        assertEquals("cP", row.at("/projected/serumViscosity/unit").asText());
         assertEquals(2.5367, row.at("/projected/serumViscosity/immediate").asDouble(), 1e-3);
         assertEquals(3.0195, row.at("/projected/serumViscosity/afterRedistribution").asDouble(), 1e-3);
         // e^−1 (one-compartment model, DOMAIN.md §4)
