@@ -12,7 +12,8 @@ import com.tngtech.archunit.lang.ArchRule;
 class ArchitectureTest {
     private static final String[] CORE = {
         "org.stasissheet.measure..", "org.stasissheet.intake..", "org.stasissheet.rules..",
-        "org.stasissheet.flow..", "org.stasissheet.apheresis..", "org.stasissheet.worksheet.."
+        "org.stasissheet.derived..", "org.stasissheet.flow..", "org.stasissheet.apheresis..",
+        "org.stasissheet.worksheet.."
     };
     private static final String[] ADAPTERS = {
         "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui.."
@@ -58,6 +59,23 @@ class ArchitectureTest {
                     "org.stasissheet.files..")
             .because("the register's records and rules are plain values; the store, the command line and the form "
                     + "are adapters around them");
+
+    @ArchTest
+    static final ArchRule flowDoesNotReachIntoApheresis = noClasses().that().resideInAPackage("org.stasissheet.flow..")
+            .should().dependOnClassesThat().resideInAPackage("org.stasissheet.apheresis..")
+            .because("flow and apheresis are siblings: what both need lives in derived, below both");
+
+    @ArchTest
+    static final ArchRule apheresisDoesNotReachIntoFlow = noClasses().that()
+            .resideInAPackage("org.stasissheet.apheresis..")
+            .should().dependOnClassesThat().resideInAPackage("org.stasissheet.flow..")
+            .because("flow and apheresis are siblings: what both need lives in derived, below both");
+
+    @ArchTest
+    static final ArchRule derivedStaysBelowBoth = noClasses().that().resideInAPackage("org.stasissheet.derived..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.stasissheet.flow..",
+                    "org.stasissheet.apheresis..", "org.stasissheet.worksheet..")
+            .because("derived quantities sit below flow and apheresis, so they must not import either");
 
     @ArchTest
     static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")

@@ -4,17 +4,20 @@ import static org.stasissheet.rules.EstimateParameters.REFERENCE_HEMATOCRIT;
 import static org.stasissheet.rules.EstimateParameters.REFERENCE_SERUM_VISCOSITY;
 import static org.stasissheet.rules.EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME;
 import static org.stasissheet.rules.EstimateParameters.TRANSFUSION_UNIT_VOLUME;
-import static org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST;
-import static org.stasissheet.rules.EstimateParameters.VOLUME_MATURE_LYMPHOCYTE;
-import static org.stasissheet.rules.EstimateParameters.VOLUME_MYELOBLAST;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST_HIGH;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST_LOW;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_HIGH;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_LOW;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MYELOBLAST_HIGH;
+import static org.stasissheet.rules.EstimateParameters.VOLUME_MYELOBLAST_LOW;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.function.BiFunction;
-import org.stasissheet.apheresis.ApheresisPlan;
-import org.stasissheet.apheresis.ApheresisPlanner;
-import org.stasissheet.apheresis.ExchangeKinetics;
+import org.stasissheet.derived.CaseQuantities;
+import org.stasissheet.derived.ExchangeKinetics;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Leukemia;
 import org.stasissheet.measure.Analyte;
@@ -24,7 +27,7 @@ import org.stasissheet.rules.RuleSet;
 
 /**
  * Microvascular flow estimates of one case: the patient's blood against reference blood, vessel by vessel.
- * Pure: everything comes from the case, the rule set and the apheresis numbers already computed.
+ * Pure: everything comes from the case and the rule set, through the quantities of {@code derived}.
  */
 public final class FlowEstimator {
     private FlowEstimator() {
@@ -46,20 +49,20 @@ public final class FlowEstimator {
      */
     public static final List<Double> LEUKAPHERESIS_REDUCTIONS = List.of(0.3, 0.5);
 
-    /** The mean cell volume used for the leukocrit, by leukemia type. */
-    public record CellVolume(String cellType, double volumeFl) {
+    /** The mean cell volume range used for the leukocrit, by leukemia type, fL (low ≤ high). */
+    public record CellVolume(String cellType, double lowFl, double highFl) {
     }
 
-    public static FlowEstimates estimate(Case c, RuleSet rules, ApheresisPlan apheresis) {
+    public static FlowEstimates estimate(Case c, RuleSet rules) {
         double referenceH = rules.value(REFERENCE_HEMATOCRIT, "1");
         double referenceSv = rules.value(REFERENCE_SERUM_VISCOSITY, "cP");
-        Estimate<Double> sv = ApheresisPlanner.serumViscosity(c);
+        Estimate<Double> sv = CaseQuantities.serumViscosity(c);
         double ratio = sv.known().map(v -> plasmaRatio(v, referenceSv)).orElse(1.0);
         String ratioBasis = sv.known()
                 .map(v -> "serum viscosity " + Numbers.plain(v) + " ÷ reference " + Numbers.plain(referenceSv)
                         + " = " + Numbers.rounded(v / referenceSv, 3) + " (measured the same way)")
                 .orElseGet(() -> sv.whyUnknown().orElseThrow() + ": plasma ratio taken as 1, only the hematocrit differs");
-        Estimate<Double> hematocrit = ApheresisPlanner.hematocrit(c);
+        Estimate<Double> hematocrit = CaseQuantities.hematocrit(c);
         if (!hematocrit.isKnown()) {
             String reason = "no flow estimate: " + hematocrit.whyUnknown().orElseThrow();
             return new FlowEstimates(referenceH, referenceSv, hematocrit, ratio, ratioBasis,
@@ -76,13 +79,15 @@ public final class FlowEstimator {
         List<FlowPoint> byDiameter = inVitroSeries(h, ratio, referenceH);
         List<FlowPoint> inVivo = inVivoSeries(h, ratio, referenceH);
         Estimate<Leukocrit> leukocrit = leukocrit(h, ratio, referenceH, cell, wbc);
+        Estimate<Double> bloodVolume = CaseQuantities.bloodVolume(c.patient());
+        Estimate<Double> fraction = CaseQuantities.intravascularFraction(c.condition().paraprotein(), rules);
 
         List<WhatIf> whatIfs = new ArrayList<>();
         for (int units : TRANSFUSION_UNITS) {
-            whatIfs.add(transfusion(units, h, ratio, referenceH, cell, wbc, apheresis, rules));
+            whatIfs.add(transfusion(units, h, ratio, referenceH, cell, wbc, bloodVolume, rules));
         }
         for (double v : EXCHANGE_PLASMA_VOLUMES) {
-            whatIfs.add(exchange(v, h, referenceH, referenceSv, sv, cell, wbc, apheresis));
+            whatIfs.add(exchange(v, h, referenceH, referenceSv, sv, cell, wbc, fraction));
         }
         for (double cut : LEUKAPHERESIS_REDUCTIONS) {
             whatIfs.add(leukapheresis(cut, h, ratio, referenceH, cell, wbc, byDiameter));
@@ -163,21 +168,31 @@ public final class FlowEstimator {
     }
 
     /**
-     * Mean leukocyte volume by leukemia type (DOMAIN.md §2, from memory): myeloblast for AML and APL,
-     * lymphoblast for ALL, mature lymphocyte for CLL. CML has no volume in our reference.
+     * Mean leukocyte volume range by leukemia type, from the rule set (DOMAIN.md §6: measured volumes vary widely,
+     * so a range, not one number): AML blasts for AML and APL, lymphoblasts for ALL, mature lymphocytes for CLL.
+     * CML has no volume in our reference.
      */
     public static Estimate<CellVolume> cellVolume(Leukemia leukemia, RuleSet rules) {
         return switch (leukemia) {
             case NONE -> Estimate.unknown("no leukocrit estimate: no leukemia recorded");
-            // an acute leukemia not yet typed takes the larger blast volume: the leukocrit then errs high, the safe side
-            case AML, APL, ACUTE_UNTYPED -> Estimate.known(new CellVolume("myeloblast",
-                    rules.value(VOLUME_MYELOBLAST, "fL")));
-            case ALL -> Estimate.known(new CellVolume("lymphoblast", rules.value(VOLUME_LYMPHOBLAST, "fL")));
-            case CLL -> Estimate.known(new CellVolume("mature lymphocyte",
-                    rules.value(VOLUME_MATURE_LYMPHOCYTE, "fL")));
+            // an acute leukemia not yet typed takes the AML blast range: the leukocrit then errs high, the safe side
+            case AML, APL, ACUTE_UNTYPED -> range("AML blast", VOLUME_MYELOBLAST_LOW, VOLUME_MYELOBLAST_HIGH, rules);
+            case ALL -> range("lymphoblast", VOLUME_LYMPHOBLAST_LOW, VOLUME_LYMPHOBLAST_HIGH, rules);
+            case CLL -> range("mature lymphocyte", VOLUME_MATURE_LYMPHOCYTE_LOW, VOLUME_MATURE_LYMPHOCYTE_HIGH, rules);
             case CML -> Estimate.unknown("no leukocrit estimate: our reference gives no mean cell volume for the "
                     + "mixed myeloid cells of CML");
         };
+    }
+
+    private static Estimate<CellVolume> range(String cellType, String lowId, String highId, RuleSet rules) {
+        double low = rules.value(lowId, "fL");
+        double high = rules.value(highId, "fL");
+        if (!(low > 0) || !(high >= low)) {
+            return Estimate.unknown("no leukocrit estimate: the rule set's " + cellType + " volume range " + lowId
+                    + " = " + Numbers.plain(low) + " fL to " + highId + " = " + Numbers.plain(high)
+                    + " fL needs 0 < low ≤ high");
+        }
+        return Estimate.known(new CellVolume(cellType, low, high));
     }
 
     /** Leukocrit (fraction) = WBC (10⁹/L) × mean cell volume (fL) × 10⁻⁶ (Lichtman &amp; Rowe 1982, DOMAIN.md §2). */
@@ -192,9 +207,12 @@ public final class FlowEstimator {
     private static Estimate<Leukocrit> leukocrit(double h, double ratio, double referenceH, Estimate<CellVolume> cell,
                                                  Estimate<Double> wbc) {
         return cell.flatMap(cv -> wbc.flatMap(count -> {
-            double lct = leukocritFraction(count, cv.volumeFl());
-            return leukocritSeries(h, lct, ratio, referenceH)
-                    .map(series -> new Leukocrit(cv.cellType(), cv.volumeFl(), count, lct, h + lct, series));
+            double low = leukocritFraction(count, cv.lowFl());
+            double high = leukocritFraction(count, cv.highFl());
+            Estimate<List<FlowPoint>> highSeries = leukocritSeries(h, high, ratio, referenceH);
+            Estimate<List<FlowPoint>> lowSeries = leukocritSeries(h, low, ratio, referenceH);
+            return highSeries.flatMap(hs -> lowSeries.map(ls -> new Leukocrit(cv.cellType(), cv.lowFl(),
+                    cv.highFl(), count, low, high, h + high, hs, ls)));
         }));
     }
 
@@ -204,22 +222,23 @@ public final class FlowEstimator {
     }
 
     private static WhatIf transfusion(int units, double h, double ratio, double referenceH, Estimate<CellVolume> cell,
-                                      Estimate<Double> wbc, ApheresisPlan apheresis, RuleSet rules) {
+                                      Estimate<Double> wbc, Estimate<Double> bloodVolume, RuleSet rules) {
         String id = "transfusion-" + units + "-unit" + (units == 1 ? "" : "s");
         String name = "red-cell transfusion, " + units + " unit" + (units == 1 ? "" : "s");
         double unitVolume = rules.value(TRANSFUSION_UNIT_VOLUME, "L");
         double unitRedCells = rules.value(TRANSFUSION_UNIT_RED_CELL_VOLUME, "L");
-        if (!apheresis.bloodVolumeL().isKnown()) {
+        if (!bloodVolume.isKnown()) {
             String reason = "not estimated: the mixing needs the blood volume, and "
-                    + apheresis.bloodVolumeL().whyUnknown().orElseThrow();
+                    + bloodVolume.whyUnknown().orElseThrow();
             return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason),
                     WhatIf.Changes.MAIN_SERIES);
         }
-        double tbv = apheresis.bloodVolumeL().known().orElseThrow();
+        double tbv = bloodVolume.known().orElseThrow();
         double after = transfusedHematocrit(h, tbv, units, unitVolume, unitRedCells);
         List<String> assumptions = List.of(
                 units + " unit" + (units == 1 ? "" : "s") + " of " + Numbers.plain(unitVolume) + " L, each holding "
-                        + Numbers.plain(unitRedCells) + " L of red cells (from memory), mixed evenly into the "
+                        + Numbers.plain(unitRedCells) + " L of red cells (rule set; a middle figure for units in additive "
+                        + "solution), mixed evenly into the "
                         + "estimated blood volume of " + Numbers.rounded(tbv, 3) + " L (Nadler).",
                 "Hematocrit " + Numbers.rounded(h, 3) + " → " + Numbers.rounded(after, 3)
                         + ": (H × TBV + units × red-cell volume) ÷ (TBV + units × unit volume); an approximation "
@@ -246,29 +265,34 @@ public final class FlowEstimator {
         return (hematocrit * bloodVolumeL + units * unitRedCellVolumeL) / (bloodVolumeL + units * unitVolumeL);
     }
 
+    /**
+     * The flow after an exchange, drawn with the viscosity projected after redistribution: the smaller, cautious
+     * gain. The larger gain right after the procedure is stated beside it.
+     */
     private static WhatIf exchange(double v, double h, double referenceH, double referenceSv, Estimate<Double> sv,
-                                   Estimate<CellVolume> cell, Estimate<Double> wbc, ApheresisPlan apheresis) {
+                                   Estimate<CellVolume> cell, Estimate<Double> wbc, Estimate<Double> fraction) {
         String id = "plasma-exchange-" + Numbers.plain(v) + "-volumes";
         String name = "plasma exchange, " + plasmaVolumes(v);
-        if (!sv.isKnown() || !apheresis.intravascularFraction().isKnown()) {
+        if (!sv.isKnown() || !fraction.isKnown()) {
             String reason = "not estimated: the projection needs a measured serum viscosity and a paraprotein "
-                    + "isotype (" + sv.whyUnknown().or(() -> apheresis.intravascularFraction().whyUnknown())
-                    .orElseThrow() + ")";
+                    + "isotype (" + sv.whyUnknown().or(fraction::whyUnknown).orElseThrow() + ")";
             return new WhatIf(id, name, List.of(reason), Estimate.unknown(reason), Estimate.unknown(reason),
                     WhatIf.Changes.MAIN_SERIES);
         }
-        double f = apheresis.intravascularFraction().known().orElseThrow();
-        double r = ExchangeKinetics.paraproteinRemaining(f, v);
+        double f = fraction.known().orElseThrow();
         double before = sv.known().orElseThrow();
-        double after = ExchangeKinetics.projectedSerumViscosity(before, referenceSv, r);
+        ExchangeProjection projected = ExchangeKinetics.projectSerumViscosity(before, referenceSv, f, v);
+        double after = projected.afterRedistribution();
         double ratio = plasmaRatio(after, referenceSv);
         List<String> assumptions = List.of(
-                plasmaVolumes(v) + " exchanged; paraprotein left r = 1 − f·(1 − e^−V) = "
-                        + Numbers.rounded(r, 3) + " with intravascular fraction f = " + Numbers.plain(f)
-                        + ", ignoring redistribution during the run.",
-                "Serum viscosity " + Numbers.rounded(before, 3) + " → " + Numbers.rounded(after, 3)
-                        + " by the log-linear projection SV_ref × (SV/SV_ref)^r: an approximation that tends to "
-                        + "under-predict the fall.",
+                plasmaVolumes(v) + " exchanged; intravascular fraction of the paraprotein f = " + Numbers.plain(f)
+                        + "; paraprotein left right after e^−V = " + Numbers.rounded(Math.exp(-v), 3)
+                        + ", after redistribution 1 − f·(1 − e^−V) = "
+                        + Numbers.rounded(ExchangeKinetics.paraproteinRemaining(f, v), 3) + ".",
+                "Serum viscosity " + Numbers.rounded(before, 3) + " → " + Numbers.rounded(projected.immediate(), 3)
+                        + " right after the procedure, " + Numbers.rounded(after, 3)
+                        + " after redistribution (log-linear projection SV_ref × (SV/SV_ref)^r, an approximation); "
+                        + "the series uses the after-redistribution value, the smaller gain.",
                 "Hematocrit and white count are kept as measured (replacement fluid assumed to leave the cell "
                         + "fractions unchanged).");
         return new WhatIf(id, name, assumptions,

@@ -17,6 +17,8 @@ public final class FlowSources {
     public static final String PRIES_1994 = "Pries AR et al., Circ Res 1994;75:904–915 (in vivo viscosity law with the "
             + "endothelial surface layer) [published]";
 
-    public static final String LICHTMAN_ROWE = "Lichtman MA, Rowe JM, Blood 1982;60(2):279–283 (leukocrit); mean cell "
-            + "volumes from memory [from memory]";
+    public static final String LICHTMAN_ROWE = "Lichtman MA, Rowe JM, Blood 1982;60(2):279–283 (leukocrit) "
+            + "[published]; mean cell volumes as ranges: CLL 154–244 fL (Costello C et al., Br J Haematol "
+            + "1980;45(2):209–214 [published, abstract]), ALL blasts from about 82 fL and monocytic AML blasts "
+            + "240–730 fL [published, secondary], the ALL upper end 250 fL [from memory]";
 }

@@ -7,10 +7,12 @@ import java.util.List;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.apheresis.ValueRange;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowPoint;
 import org.stasissheet.flow.Leukocrit;
 import org.stasissheet.flow.WhatIf;
+import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Estimate;
 
 /**
@@ -39,8 +41,13 @@ final class EstimatesJson {
             r.put("plasmaVolumes", row.plasmaVolumes());
             number(r, rowReasons, "volumeL", row.volumeL());
             r.put("intravascularRemaining", row.intravascularRemaining());
+            // CASE-FORMAT's key keeps its meaning: the level once the extravascular pool has flowed back
             number(r, rowReasons, "paraproteinAfterGPerL", row.paraproteinAfterGPerL());
-            number(r, rowReasons, "serumViscosityAfter", row.serumViscosityAfter());
+            ObjectNode projected = r.putObject("projected");
+            // units as the course report writes them (COURSE-FORMAT): the catalogue's canonical units
+            projection(projected, rowReasons, "paraproteinGPerL", row.paraproteinGPerL(), Analyte.IGM.canonicalUnit());
+            projection(projected, rowReasons, "serumViscosity", row.serumViscosity(),
+                    Analyte.SERUM_VISCOSITY.canonicalUnit());
             r.set("reasons", rowReasons);
         }
         ObjectNode leuka = n.putObject("leukapheresis");
@@ -67,11 +74,12 @@ final class EstimatesJson {
             Leukocrit l = known.value();
             ObjectNode lk = n.putObject("leukocrit");
             lk.put("cellType", l.cellType());
-            lk.put("meanCellVolumeFl", l.meanCellVolumeFl());
+            lowHigh(lk.putObject("cellVolumeFl"), l.volumeLowFl(), l.volumeHighFl());
             lk.put("wbc", l.wbc());
-            lk.put("leukocrit", l.leukocrit());
+            lowHigh(lk.putObject("leukocrit"), l.leukocritLow(), l.leukocritHigh());
             lk.put("combinedFraction", l.combinedFraction());
             points(lk.putArray("byDiameter"), l.byDiameter());
+            points(lk.putArray("byDiameterLowVolume"), l.byDiameterLowVolume());
         } else {
             n.putNull("leukocrit");
             reasons.put("leukocrit", f.leukocrit().whyUnknown().orElseThrow());
@@ -99,6 +107,28 @@ final class EstimatesJson {
             n.putNull(key);
             reasons.put(key, e.whyUnknown().orElseThrow());
         }
+    }
+
+    /**
+     * {@code key: {immediate, afterRedistribution, unit}} (the shape the course report will reuse), or null with
+     * the reason under {@code projected.key}.
+     */
+    private static void projection(ObjectNode n, ObjectNode reasons, String key, Estimate<ExchangeProjection> e,
+                                   String unit) {
+        if (e instanceof Estimate.Known<ExchangeProjection> known) {
+            ObjectNode p = n.putObject(key);
+            p.put("immediate", known.value().immediate());
+            p.put("afterRedistribution", known.value().afterRedistribution());
+            p.put("unit", unit);
+        } else {
+            n.putNull(key);
+            reasons.put("projected." + key, e.whyUnknown().orElseThrow());
+        }
+    }
+
+    private static void lowHigh(ObjectNode n, double low, double high) {
+        n.put("low", low);
+        n.put("high", high);
     }
 
     private static void range(ObjectNode n, ObjectNode reasons, String key, Estimate<ValueRange> e) {

@@ -4,6 +4,7 @@ import java.util.List;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.apheresis.ValueRange;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.flow.FlowPoint;
@@ -32,9 +33,9 @@ final class EstimatesText {
             sb.append("    ").append(FlowEstimator.plasmaVolumes(row.plasmaVolumes())).append(": ")
                     .append(litres(row.volumeL())).append("; intravascular left ")
                     .append(Numbers.rounded(100 * row.intravascularRemaining(), 3)).append(" %").append(NL)
-                    .append("      paraprotein after: ").append(value(row.paraproteinAfterGPerL(), " g/L")).append(NL)
-                    .append("      serum viscosity after (projection): ")
-                    .append(value(row.serumViscosityAfter(), " (on the scale the laboratory reported)")).append(NL);
+                    .append("      paraprotein ").append(projection(row.paraproteinGPerL(), " g/L")).append(NL)
+                    .append("      serum viscosity (projection, on the scale the laboratory reported) ")
+                    .append(projection(row.serumViscosity(), "")).append(NL);
         }
         line(sb, "Leukapheresis, blood to process", range(plan.leukapheresis().processVolumeL(), " L"));
         line(sb, "Leukapheresis, WBC after one", range(plan.leukapheresis().wbcAfter(), " x10^9/L"));
@@ -68,10 +69,11 @@ final class EstimatesText {
         if (f.leukocrit() instanceof Estimate.Known<Leukocrit> lk) {
             Leukocrit l = lk.value();
             sb.append("  Leukocrit (approximation, never raises flow): ").append(Numbers.rounded(l.wbc(), 3))
-                    .append(" x10^9/L x ").append(Numbers.plain(l.meanCellVolumeFl())).append(" fL (")
-                    .append(l.cellType()).append(", from memory) = ").append(Numbers.rounded(l.leukocrit(), 3))
-                    .append("; added to the hematocrit: ").append(Numbers.rounded(l.combinedFraction(), 3))
-                    .append(NL);
+                    .append(" x10^9/L x ").append(Numbers.plain(l.volumeLowFl())).append("–")
+                    .append(Numbers.plain(l.volumeHighFl())).append(" fL (").append(l.cellType())
+                    .append(", range from the rule set) = ").append(Numbers.rounded(l.leukocritLow(), 3)).append("–")
+                    .append(Numbers.rounded(l.leukocritHigh(), 3)).append("; the column uses the high end: ")
+                    .append(Numbers.rounded(l.combinedFraction(), 3)).append(" with the hematocrit").append(NL);
         } else {
             sb.append("  Leukocrit: ").append(f.leukocrit().whyUnknown().orElseThrow()).append(NL);
         }
@@ -103,6 +105,14 @@ final class EstimatesText {
 
     private static String flowNumber(FlowPoint p) {
         return Numbers.rounded(p.relativeFlow(), 3);
+    }
+
+    /** Both moments of one projection, each with its plain label. */
+    private static String projection(Estimate<ExchangeProjection> e, String unit) {
+        return e.known().map(p -> ExchangeProjection.IMMEDIATE_LABEL + ": " + Numbers.rounded(p.immediate(), 3) + unit
+                        + "; " + ExchangeProjection.AFTER_REDISTRIBUTION_LABEL + ": "
+                        + Numbers.rounded(p.afterRedistribution(), 3) + unit)
+                .orElseGet(() -> NOT_ESTIMATED + e.whyUnknown().orElseThrow());
     }
 
     private static String litres(Estimate<Double> e) {

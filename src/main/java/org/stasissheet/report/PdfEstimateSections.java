@@ -18,6 +18,7 @@ import java.util.Set;
 import java.util.function.Function;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.apheresis.ValueRange;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowPoint;
@@ -83,9 +84,10 @@ final class PdfEstimateSections {
         Optional<Leukocrit> lk = flow.leukocrit().known();
         if (lk.isPresent()) {
             pdf.sources().cite(FlowSources.LICHTMAN_ROWE);
-            list.add(named("patient with leukocrit " + Numbers.rounded(lk.get().leukocrit(), 2) + " ("
-                    + lk.get().cellType() + " " + Numbers.plain(lk.get().meanCellVolumeFl()) + " fL)",
-                    lk.get().byDiameter()));
+            Leukocrit l = lk.get();
+            list.add(named("patient with leukocrit " + Numbers.rounded(l.leukocritLow(), 2) + "–"
+                    + Numbers.rounded(l.leukocritHigh(), 2) + " (" + l.cellType() + " " + Numbers.plain(l.volumeLowFl())
+                    + "–" + Numbers.plain(l.volumeHighFl()) + " fL; drawn at the high end)", l.byDiameter()));
         }
         for (WhatIf w : flow.whatIf()) {
             String suffix = w.changes() == WhatIf.Changes.LEUKOCRIT_ONLY ? " (with leukocrit)" : "";
@@ -178,17 +180,15 @@ final class PdfEstimateSections {
         Paragraph head = pdf.subheading("Plasma exchange [" + kinetics + "]", pdf.bodyBold(), 4);
         doc.add(head);
         PdfPTable t = pdf.table(1.3f, 1.4f, 2f, 2f, 2.4f);
-        pdf.headerCells(t, "plasma volumes", "volume", "intravascular left", "paraprotein after",
-                "serum viscosity after [" + projection + "]");
+        pdf.headerCells(t, "plasma volumes", "volume", "intravascular left", "paraprotein",
+                "serum viscosity [" + projection + "] (approximation)");
         Set<String> reasons = new LinkedHashSet<>();
         for (ExchangeRow r : plan.exchanges()) {
             t.addCell(pdf.cell(Numbers.rounded(r.plasmaVolumes(), 3), pdf.body()));
             t.addCell(pdf.cell(orDash(r.volumeL(), x -> Numbers.rounded(x, 3) + " L", reasons), pdf.body()));
             t.addCell(pdf.cell(Numbers.rounded(r.intravascularRemaining() * 100, 3) + " %", pdf.body()));
-            t.addCell(pdf.cell(orDash(r.paraproteinAfterGPerL(), x -> Numbers.rounded(x, 3) + " g/L", reasons),
-                    pdf.body()));
-            t.addCell(pdf.cell(orDash(r.serumViscosityAfter(), x -> Numbers.rounded(x, 3) + " (approximation)",
-                    reasons), pdf.body()));
+            t.addCell(pdf.cell(orDash(r.paraproteinGPerL(), x -> bothMoments(x, " g/L"), reasons), pdf.body()));
+            t.addCell(pdf.cell(orDash(r.serumViscosity(), x -> bothMoments(x, ""), reasons), pdf.body()));
         }
         doc.add(t);
         for (String reason : reasons) {
@@ -211,6 +211,12 @@ final class PdfEstimateSections {
     private static void row(WorksheetPdf pdf, PdfPTable t, String label, String value) {
         t.addCell(pdf.cell(label, pdf.bodyBold()));
         t.addCell(pdf.cell(value, pdf.body()));
+    }
+
+    private static String bothMoments(ExchangeProjection p, String unit) {
+        return ExchangeProjection.IMMEDIATE_SHORT + " " + Numbers.rounded(p.immediate(), 3) + unit + "\n"
+                + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT + " " + Numbers.rounded(p.afterRedistribution(), 3)
+                + unit;
     }
 
     private static String litres(Estimate<Double> e) {

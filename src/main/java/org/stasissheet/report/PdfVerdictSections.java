@@ -17,6 +17,7 @@ import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
 import org.stasissheet.rules.Level;
 import org.stasissheet.rules.TumorLysisVerdict;
+import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
 /** The worksheet PDF's sections that present the rules: the three verdicts and the flags by level. */
@@ -58,7 +59,7 @@ final class PdfVerdictSections {
         grade(parts, LeukostasisVerdict.Organ.PULMONARY, f.pulmonaryGrade());
         grade(parts, LeukostasisVerdict.Organ.NEUROLOGICAL, f.neurologicalGrade());
         grade(parts, LeukostasisVerdict.Organ.OTHER, f.otherOrganGrade());
-        return "Grades: " + String.join("; ", parts) + " (descriptors unverified \u2014 check the source).";
+        return "Grades: " + String.join("; ", parts) + ".\n" + Cautions.GRADING_UNVERIFIED;
     }
 
     private static void grade(List<String> parts, LeukostasisVerdict.Organ organ, Optional<Integer> g) {

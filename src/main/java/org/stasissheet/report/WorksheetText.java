@@ -12,6 +12,7 @@ import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.measure.Quantity;
 import org.stasissheet.rules.Provenance;
 import org.stasissheet.worksheet.InputLine;
+import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
 /** Renders a worksheet as plain text for the terminal: the same content as the JSON, for people. */
@@ -52,6 +53,7 @@ public final class WorksheetText {
         LeukostasisVerdict lk = sheet.leukostasis();
         sb.append("  ").append(VerdictWords.upperFirst(VerdictWords.leukostasis(lk))).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
+        sb.append("    ! ").append(Cautions.GRADING_UNVERIFIED).append(NL);
         TumorLysisVerdict tl = sheet.tumorLysis();
         if (!tl.applies()) {
             sb.append("  Tumor lysis: ").append(TumorLysisVerdict.NOT_CHECKED).append('.').append(NL).append(NL);

@@ -15,9 +15,13 @@ public final class EstimateParameters {
     /** Reference serum viscosity, the middle of the normal range (Mehta &amp; Singhal 2003). */
     public static final String REFERENCE_SERUM_VISCOSITY = "flow.referenceSerumViscosity";
 
-    public static final String VOLUME_MYELOBLAST = "leukocrit.volume.myeloblast";
-    public static final String VOLUME_LYMPHOBLAST = "leukocrit.volume.lymphoblast";
-    public static final String VOLUME_MATURE_LYMPHOCYTE = "leukocrit.volume.matureLymphocyte";
+    /** Mean cell volume ranges for the leukocrit, low and high ends (DOMAIN.md §6: a range, not one number). */
+    public static final String VOLUME_MYELOBLAST_LOW = "leukocrit.volume.myeloblast.low";
+    public static final String VOLUME_MYELOBLAST_HIGH = "leukocrit.volume.myeloblast.high";
+    public static final String VOLUME_LYMPHOBLAST_LOW = "leukocrit.volume.lymphoblast.low";
+    public static final String VOLUME_LYMPHOBLAST_HIGH = "leukocrit.volume.lymphoblast.high";
+    public static final String VOLUME_MATURE_LYMPHOCYTE_LOW = "leukocrit.volume.matureLymphocyte.low";
+    public static final String VOLUME_MATURE_LYMPHOCYTE_HIGH = "leukocrit.volume.matureLymphocyte.high";
 
     public static final String TRANSFUSION_UNIT_VOLUME = "transfusion.unitVolume";
     public static final String TRANSFUSION_UNIT_RED_CELL_VOLUME = "transfusion.unitRedCellVolume";

@@ -19,7 +19,7 @@ public final class Assessor {
         ApheresisPlan apheresis = ApheresisPlanner.plan(c, rules);
         Verdicts.Outcome outcome = Verdicts.assess(c, rules);
         return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING,
-                FlowEstimator.estimate(c, rules, apheresis), apheresis, outcome.hyperviscosity(),
+                FlowEstimator.estimate(c, rules), apheresis, outcome.hyperviscosity(),
                 outcome.leukostasis(), outcome.tumorLysis(), outcome.flags());
     }
 

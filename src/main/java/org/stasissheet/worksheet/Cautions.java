@@ -11,6 +11,15 @@ public final class Cautions {
     public static final String SHORT = "Decision support only: it supports, and never replaces, clinical judgement, "
             + "local protocols and licensed practice.";
 
+    /**
+     * Shown wherever the leukostasis organ grades show (form, text, PDF): the per-organ descriptors and the
+     * combination rule were not found in Novotny 2005's text, so they are ours and unverified (README, "Still
+     * unverified").
+     */
+    public static final String GRADING_UNVERIFIED = "Organ-grade descriptors and the combination rule (overall = "
+            + "highest organ grade): unverified — check the source (Novotny JR et al., Eur J Haematol "
+            + "2005;74(6):501–510).";
+
     public static final List<String> STANDING = List.of(
             SHORT,
             "Check every value against the source documents before acting on this sheet.",

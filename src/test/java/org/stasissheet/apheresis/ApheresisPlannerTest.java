@@ -35,10 +35,15 @@ class ApheresisPlannerTest {
         assertEquals(2.6767, one.volumeL().known().orElseThrow(), 1e-9);
         // e^−1 = 0.367879 (one-compartment model, DOMAIN.md §4)
         assertEquals(0.367879, one.intravascularRemaining(), 1e-6);
-        // by hand: IgM 59 g/L × (1 − 0.76 × 0.632121) = 59 × 0.519588 = 30.6557 g/L
-        assertEquals(30.6557, one.paraproteinAfterGPerL().known().orElseThrow(), 1e-3);
-        // by hand: 1.6 × (5.6 / 1.6)^0.519588 = 1.6 × 3.5^0.519588 = 1.6 × 1.91743 = 3.0679 cP
-        assertEquals(3.0679, one.serumViscosityAfter().known().orElseThrow(), 1e-3);
+        // by hand, right after: IgM 59 g/L × e^−1 = 59 × 0.367879 = 21.7049 g/L
+        assertEquals(21.7049, one.paraproteinGPerL().known().orElseThrow().immediate(), 1e-3);
+        // by hand, after redistribution: 59 × (1 − 0.78 × 0.632121) = 59 × 0.506946 = 29.9098 g/L
+        // (f = 0.78, Reverberi 2007 as quoted, DOMAIN.md §6)
+        assertEquals(29.9098, one.paraproteinAfterGPerL().known().orElseThrow(), 1e-3);
+        assertEquals(29.9098, one.paraproteinGPerL().known().orElseThrow().afterRedistribution(), 1e-3);
+        // by hand: 1.6 × 3.5^0.367879 = 2.5367 cP right after; 1.6 × 3.5^0.506946 = 3.0195 cP after redistribution
+        assertEquals(2.5367, one.serumViscosity().known().orElseThrow().immediate(), 1e-3);
+        assertEquals(3.0195, one.serumViscosity().known().orElseThrow().afterRedistribution(), 1e-3);
 
         ExchangeRow oneAndHalf = plan.exchanges().get(1);
         // by hand: 1.5 × 2.6767 = 4.01505 L
@@ -98,14 +103,16 @@ class ApheresisPlannerTest {
         assertTrue(row.paraproteinAfterGPerL().whyUnknown().orElseThrow().contains("labs.iga"));
         // SV can still be projected from f and V alone (by hand): r = 1 − 0.42 × 0.632121 = 0.734509;
         // ln 2.5 × r = 0.916291 × 0.734509 = 0.673022; e^0.673022 = 1.960156; × 1.6 = 3.1362 cP
-        assertEquals(3.1362, row.serumViscosityAfter().known().orElseThrow(), 1e-3);
+        assertEquals(3.1362, row.serumViscosity().known().orElseThrow().afterRedistribution(), 1e-3);
+        // right after (by hand): 1.6 × 2.5^0.367879 = 2.2414 cP
+        assertEquals(2.2414, row.serumViscosity().known().orElseThrow().immediate(), 1e-3);
     }
 
     @Test
     @DisplayName("no paraprotein: exchange projections absent with the reason")
     void noParaprotein() {
         ApheresisPlan plan = ApheresisPlanner.plan(aCase().lab(Analyte.SERUM_VISCOSITY, 3, "cP").build(), rules);
-        assertTrue(plan.exchanges().get(0).serumViscosityAfter().whyUnknown().orElseThrow()
+        assertTrue(plan.exchanges().get(0).serumViscosity().whyUnknown().orElseThrow()
                 .contains("no paraprotein isotype"));
     }
 

@@ -7,6 +7,8 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.stasissheet.derived.BloodVolume;
+import org.stasissheet.derived.ExchangeKinetics;
 import org.stasissheet.flow.Poiseuille;
 import org.stasissheet.intake.Sex;
 

@@ -41,16 +41,24 @@ public final class EstimateFixtures {
         // middle of the 1.4–1.8 normal range, Mehta & Singhal 2003 (published, secondary)
         put(p, EstimateParameters.REFERENCE_SERUM_VISCOSITY, 1.6, "cP", "Mehta & Singhal 2003, middle of 1.4–1.8",
                 Basis.PUBLISHED_SECONDARY);
-        // mean cell volumes: from memory (DOMAIN.md §2)
-        put(p, EstimateParameters.VOLUME_MYELOBLAST, 350, "fL", "DOMAIN.md §2", Basis.FROM_MEMORY);
-        put(p, EstimateParameters.VOLUME_LYMPHOBLAST, 250, "fL", "DOMAIN.md §2", Basis.FROM_MEMORY);
-        put(p, EstimateParameters.VOLUME_MATURE_LYMPHOCYTE, 200, "fL", "DOMAIN.md §2", Basis.FROM_MEMORY);
-        // red-cell unit: from memory
-        put(p, EstimateParameters.TRANSFUSION_UNIT_VOLUME, 0.3, "L", "typical unit", Basis.FROM_MEMORY);
-        put(p, EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME, 0.18, "L", "typical unit", Basis.FROM_MEMORY);
-        // intravascular fractions, Reverberi & Reverberi 2007 (76 % for IgM from memory)
-        put(p, EstimateParameters.INTRAVASCULAR_FRACTION_IGM, 0.76, "1", "Reverberi 2007 gives 76–78 %",
-                Basis.FROM_MEMORY);
+        // mean cell volume ranges (DOMAIN.md §6): monocytic AML blasts 240–730 fL and ALL blasts about 82 fL
+        // (one measured series, published, secondary); ALL upper end 250 fL from memory; CLL 154–244 fL
+        // (Costello C et al., Br J Haematol 1980;45:209, abstract)
+        put(p, EstimateParameters.VOLUME_MYELOBLAST_LOW, 240, "fL", "DOMAIN.md §6", Basis.PUBLISHED_SECONDARY);
+        put(p, EstimateParameters.VOLUME_MYELOBLAST_HIGH, 730, "fL", "DOMAIN.md §6", Basis.PUBLISHED_SECONDARY);
+        put(p, EstimateParameters.VOLUME_LYMPHOBLAST_LOW, 82, "fL", "DOMAIN.md §6", Basis.PUBLISHED_SECONDARY);
+        put(p, EstimateParameters.VOLUME_LYMPHOBLAST_HIGH, 250, "fL", "DOMAIN.md §2", Basis.FROM_MEMORY);
+        put(p, EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_LOW, 154, "fL", "Costello 1980", Basis.PUBLISHED);
+        put(p, EstimateParameters.VOLUME_MATURE_LYMPHOCYTE_HIGH, 244, "fL", "Costello 1980", Basis.PUBLISHED);
+                // red cells in additive solution: 300–400 mL at hematocrit 55–65 % (Circular of Information, as quoted);
+        // the middle, 0.35 L at 0.60
+        put(p, EstimateParameters.TRANSFUSION_UNIT_VOLUME, 0.35, "L", "Circular of Information, as quoted",
+                Basis.PUBLISHED_SECONDARY);
+        put(p, EstimateParameters.TRANSFUSION_UNIT_RED_CELL_VOLUME, 0.21, "L", "Circular of Information, as quoted",
+                Basis.PUBLISHED_SECONDARY);
+        // intravascular fractions, Reverberi & Reverberi 2007 (IgM 78 % as quoted by a later review, DOMAIN.md §6)
+        put(p, EstimateParameters.INTRAVASCULAR_FRACTION_IGM, 0.78, "1", "Reverberi 2007 as quoted",
+                Basis.PUBLISHED_SECONDARY);
         put(p, EstimateParameters.INTRAVASCULAR_FRACTION_IGG, 0.45, "1", "Reverberi 2007", Basis.PUBLISHED);
         put(p, EstimateParameters.INTRAVASCULAR_FRACTION_IGA, 0.42, "1", "Reverberi 2007", Basis.PUBLISHED);
         // leukapheresis: common practice

@@ -10,7 +10,6 @@ import java.util.List;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
-import org.stasissheet.apheresis.ApheresisPlanner;
 import org.stasissheet.apheresis.EstimateFixtures;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Leukemia;
@@ -24,7 +23,7 @@ class FlowEstimatorTest {
     private final RuleSet rules = EstimateFixtures.rules();
 
     private FlowEstimates estimate(Case c) {
-        return FlowEstimator.estimate(c, rules, ApheresisPlanner.plan(c, rules));
+        return FlowEstimator.estimate(c, rules);
     }
 
     private static double at(List<FlowPoint> series, double diameter) {
@@ -111,23 +110,50 @@ class FlowEstimatorTest {
     @DisplayName("leukocrit")
     class LeukocritEstimate {
         @Test
-        @DisplayName("AML uses the myeloblast volume: 200 × 350 fL × 10⁻⁶ = 0.07")
+        @DisplayName("AML: a leukocrit range 200 × 240–730 fL × 10⁻⁶ = 0.048–0.146, drawn at the high end")
         void aml() {
             Case c = aCase().leukemia(Leukemia.AML).lab(Analyte.HEMATOCRIT, 0.25, "1")
                     .lab(Analyte.WBC, 200, "10*9/L").build();
             Leukocrit l = estimate(c).leukocrit().known().orElseThrow();
-            assertEquals("myeloblast", l.cellType());
-            // by hand: 200 × 350 × 1e-6 = 0.07 (Lichtman & Rowe 1982 definition, volume from memory)
-            assertEquals(0.07, l.leukocrit(), 1e-12);
-            assertEquals(0.32, l.combinedFraction(), 1e-12);
+            assertEquals("AML blast", l.cellType());
+            // by hand: 200 × 240 × 1e-6 = 0.048 and 200 × 730 × 1e-6 = 0.146 (Lichtman & Rowe 1982 definition;
+            // 240–730 fL measured in monocytic AML blasts, DOMAIN.md §6)
+            assertEquals(0.048, l.leukocritLow(), 1e-12);
+            assertEquals(0.146, l.leukocritHigh(), 1e-12);
+            // by hand: 0.25 + 0.146 = 0.396, the cautious end fed to the law
+            assertEquals(0.396, l.combinedFraction(), 1e-12);
+            // the high end (more cells by volume) never shows more flow than the low end
+            for (int i = 0; i < l.byDiameter().size(); i++) {
+                assertTrue(l.byDiameter().get(i).relativeFlow() <= l.byDiameterLowVolume().get(i).relativeFlow());
+            }
         }
 
         @Test
-        @DisplayName("ALL uses the lymphoblast, CLL the mature lymphocyte volume")
+        @DisplayName("volume ranges by type: ALL 82–250 fL, CLL 154–244 fL, APL as AML 240–730 fL")
         void lymphoid() {
-            assertEquals(250, FlowEstimator.cellVolume(Leukemia.ALL, rules).known().orElseThrow().volumeFl(), 0);
-            assertEquals(200, FlowEstimator.cellVolume(Leukemia.CLL, rules).known().orElseThrow().volumeFl(), 0);
-            assertEquals(350, FlowEstimator.cellVolume(Leukemia.APL, rules).known().orElseThrow().volumeFl(), 0);
+            // expected: ALL blasts about 82 fL, monocytic AML blasts 240–730 fL (DOMAIN.md §6, one measured
+            // series); B-CLL modal volumes 153.8–244.2 fL (Costello C et al., Br J Haematol 1980;45:209, abstract)
+            FlowEstimator.CellVolume all = FlowEstimator.cellVolume(Leukemia.ALL, rules).known().orElseThrow();
+            assertEquals(82, all.lowFl(), 0);
+            assertEquals(250, all.highFl(), 0);
+            FlowEstimator.CellVolume cll = FlowEstimator.cellVolume(Leukemia.CLL, rules).known().orElseThrow();
+            assertEquals(153.8, cll.lowFl(), 0.5);
+            assertEquals(244.2, cll.highFl(), 0.5);
+            FlowEstimator.CellVolume apl = FlowEstimator.cellVolume(Leukemia.APL, rules).known().orElseThrow();
+            assertEquals(240, apl.lowFl(), 0);
+            assertEquals(730, apl.highFl(), 0);
+        }
+
+        @Test
+        @DisplayName("a local rule set whose volume range runs backwards gives a reason, not a number")
+        void backwardsRange() {
+            java.util.Map<String, org.stasissheet.rules.Parameter> p = new java.util.LinkedHashMap<>(rules.parameters());
+            String low = org.stasissheet.rules.EstimateParameters.VOLUME_LYMPHOBLAST_LOW;
+            p.put(low, new org.stasissheet.rules.Parameter(low, new org.stasissheet.measure.Quantity(300, "fL"),
+                    "invented local edit", org.stasissheet.rules.Basis.FROM_MEMORY, ""));
+            RuleSet edited = new RuleSet(rules.provenance(), rules.description(), p, rules.rules());
+            String why = FlowEstimator.cellVolume(Leukemia.ALL, edited).whyUnknown().orElseThrow();
+            assertTrue(why.contains("300 fL") && why.contains("needs 0 < low ≤ high"), why);
         }
 
         @Test
@@ -227,8 +253,10 @@ class FlowEstimatorTest {
             double one = at(f.whatIf().get(2).byDiameter().known().orElseThrow(), 10);
             double oneAndHalf = at(f.whatIf().get(3).byDiameter().known().orElseThrow(), 10);
             assertTrue(now < one && one < oneAndHalf);
-            // by hand: SV after 1.0 volume = 3.0679 (see ApheresisPlannerTest); flow scales by 5.6 / 3.0679 = 1.8254
-            assertEquals(1.8254, one / now, 1e-3);
+            // by hand: SV after redistribution at 1.0 volume = 3.0195 (see ApheresisPlannerTest); the series uses
+            // that, the cautious value, so flow scales by 5.6 / 3.0195 = 1.8546
+            assertEquals(1.8546, one / now, 1e-3);
+            assertTrue(f.whatIf().get(2).assumptions().stream().anyMatch(s -> s.contains("right after the procedure")));
             assertTrue(f.whatIf().get(2).assumptions().stream().anyMatch(s -> s.contains("approximation")));
         }
 

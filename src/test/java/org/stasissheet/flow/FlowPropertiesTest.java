@@ -10,7 +10,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.EstimateFixtures;
-import org.stasissheet.apheresis.ExchangeKinetics;
+import org.stasissheet.derived.ExchangeKinetics;
 import org.stasissheet.apheresis.ExchangeRow;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Leukemia;
@@ -108,7 +108,8 @@ class FlowPropertiesTest {
             f.byDiameter().known().ifPresent(s -> s.forEach(p -> numbers.add(p.relativeFlow())));
             f.inVivo().known().ifPresent(s -> s.forEach(p -> numbers.add(p.relativeFlow())));
             f.leukocrit().known().ifPresent(l -> {
-                numbers.add(l.leukocrit());
+                numbers.add(l.leukocritLow());
+                numbers.add(l.leukocritHigh());
                 List<FlowPoint> plain = f.byDiameter().known().orElseThrow();
                 for (int k = 0; k < plain.size(); k++) {
                     assertTrue(l.byDiameter().get(k).relativeFlow() <= plain.get(k).relativeFlow());
@@ -125,7 +126,10 @@ class FlowPropertiesTest {
             for (ExchangeRow row : a.exchanges()) {
                 addKnown(numbers, row.volumeL());
                 addKnown(numbers, row.paraproteinAfterGPerL());
-                addKnown(numbers, row.serumViscosityAfter());
+                row.serumViscosity().known().ifPresent(p -> {
+                    numbers.add(p.immediate());
+                    numbers.add(p.afterRedistribution());
+                });
             }
             for (double n : numbers) {
                 assertTrue(Double.isFinite(n) && n >= 0, "seed " + seed + ": " + n + " in " + c);

@@ -137,7 +137,7 @@ class FlagRulesTest {
     }
 
     @Test
-    @DisplayName("apheresis.leukostasis / hyperleukocytosis-prophylaxis (ASFA 2023, from memory), never in APL")
+    @DisplayName("apheresis.leukostasis / hyperleukocytosis-prophylaxis (ASFA 2023, secondary transcription), never in APL")
     void leukapheresisIndications() {
         assertTrue(aml(150).grades(1, 0, 0).fires("apheresis.leukostasis"));
         assertFalse(aml(150).grades(1, 0, 0).fires("apheresis.hyperleukocytosis-prophylaxis"));

@@ -1,14 +1,14 @@
 package org.stasissheet.ui.entry;
 
 import org.stasissheet.rules.LeukostasisVerdict;
+import org.stasissheet.worksheet.Cautions;
 
 /**
  * The short descriptor beside each organ grade: the rule package's own words
- * ({@link LeukostasisVerdict#DESCRIPTORS}, basis from memory), so the form, the PDF and the rules say the same.
+ * ({@link LeukostasisVerdict#DESCRIPTORS}, unverified against Novotny 2005), so the form, the PDF and the rules say the same.
  */
 final class GradeWords {
-    static final String HINT = "0 none · 1 slight · 2 marked · 3 severe; the wording of each grade is from memory ("
-            + LeukostasisVerdict.COMBINATION_RULE + ")";
+    static final String HINT = "0 none · 1 slight · 2 marked · 3 severe. " + Cautions.GRADING_UNVERIFIED;
 
     private GradeWords() {
     }

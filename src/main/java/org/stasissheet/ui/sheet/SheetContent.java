@@ -7,6 +7,7 @@ import java.util.Objects;
 import java.util.Optional;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.apheresis.ValueRange;
 import org.stasissheet.flow.FlowEstimates;
 import org.stasissheet.flow.FlowPoint;
@@ -27,6 +28,7 @@ import org.stasissheet.rules.TumorLysisVerdict;
 import org.stasissheet.ui.chart.FlowChartModel;
 import org.stasissheet.ui.chart.FlowSeries;
 import org.stasissheet.worksheet.InputLine;
+import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.Worksheet;
 
 /**
@@ -90,15 +92,18 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         }
     }
 
-    /** One row of the exchange table. */
-    public record ExchangeLine(String plasmaVolumes, String volume, String intravascularLeft, String paraproteinAfter,
-                               String viscosityAfter) {
+    /** One row of the exchange table: each projection right after the procedure and after redistribution. */
+    public record ExchangeLine(String plasmaVolumes, String volume, String intravascularLeft,
+                               String paraproteinImmediate, String paraproteinAfterRedistribution,
+                               String viscosityImmediate, String viscosityAfterRedistribution) {
         public ExchangeLine {
             Objects.requireNonNull(plasmaVolumes, "plasmaVolumes");
             Objects.requireNonNull(volume, "volume");
             Objects.requireNonNull(intravascularLeft, "intravascularLeft");
-            Objects.requireNonNull(paraproteinAfter, "paraproteinAfter");
-            Objects.requireNonNull(viscosityAfter, "viscosityAfter");
+            Objects.requireNonNull(paraproteinImmediate, "paraproteinImmediate");
+            Objects.requireNonNull(paraproteinAfterRedistribution, "paraproteinAfterRedistribution");
+            Objects.requireNonNull(viscosityImmediate, "viscosityImmediate");
+            Objects.requireNonNull(viscosityAfterRedistribution, "viscosityAfterRedistribution");
         }
     }
 
@@ -147,7 +152,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(VerdictWords.hyperviscosity(hv)),
                         hvRaised, hvLines),
                 new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", upper(VerdictWords.leukostasis(lk)),
-                        lkRaised, List.of(lk.reason())),
+                        lkRaised, List.of(lk.reason(), Cautions.GRADING_UNVERIFIED)),
                 tlCard);
     }
 
@@ -180,9 +185,11 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 + ", serum viscosity " + Numbers.plain(f.referenceSerumViscosity())
                 + ") at the same pressure and vessel size; 1 means as in the reference blood.");
         notes.add("Plasma ratio: " + f.plasmaRatioBasis());
-        f.leukocrit().known().ifPresent(l -> notes.add("Leukocrit " + Numbers.rounded(l.leukocrit(), 3) + " = WBC "
-                + Numbers.rounded(l.wbc(), 3) + " ×10⁹/L × " + Numbers.plain(l.meanCellVolumeFl()) + " fL ("
-                + l.cellType() + ", from memory); it only ever lowers the estimate."));
+        f.leukocrit().known().ifPresent(l -> notes.add("Leukocrit " + Numbers.rounded(l.leukocritLow(), 3) + "–"
+                + Numbers.rounded(l.leukocritHigh(), 3) + " = WBC " + Numbers.rounded(l.wbc(), 3) + " ×10⁹/L × "
+                + Numbers.plain(l.volumeLowFl()) + "–" + Numbers.plain(l.volumeHighFl()) + " fL (" + l.cellType()
+                + ", a measured range, see the rule set); the curve is drawn at the high end and only ever lowers "
+                + "the estimate."));
         return new FlowChartModel(series, missing, notes, f.caveats());
     }
 
@@ -208,7 +215,10 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         for (ExchangeRow r : plan.exchanges()) {
             lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), value(r.volumeL(), " L"),
                     Numbers.rounded(100 * r.intravascularRemaining(), 3) + " %",
-                    value(r.paraproteinAfterGPerL(), " g/L"), value(r.serumViscosityAfter(), "")));
+                    value(r.paraproteinGPerL().map(ExchangeProjection::immediate), " g/L"),
+                    value(r.paraproteinAfterGPerL(), " g/L"),
+                    value(r.serumViscosity().map(ExchangeProjection::immediate), ""),
+                    value(r.serumViscosity().map(ExchangeProjection::afterRedistribution), "")));
         }
         return lines;
     }

@@ -7,11 +7,13 @@ import javafx.css.PseudoClass;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
+import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.ui.chart.FlowChartModel;
 import org.stasissheet.ui.chart.FlowChartView;
@@ -176,22 +178,33 @@ public final class SheetView {
             volumes.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
         }
         GridPane exchange = grid("exchange-table");
+        // fixed shares, so that the short columns never collapse into one letter per line
+        for (double percent : new double[] {9, 10, 15, 16, 17, 16, 17}) {
+            ColumnConstraints column = new ColumnConstraints();
+            column.setPercentWidth(percent);
+            exchange.getColumnConstraints().add(column);
+        }
         exchange.addRow(0, cell("plasma volumes", "column-head"), cell("volume", "column-head"),
-                cell("intravascular left", "column-head"), cell("paraprotein after", "column-head"),
-                cell("serum viscosity after (projection)", "column-head"));
+                cell("intravascular left", "column-head"),
+                cell("paraprotein\n" + ExchangeProjection.IMMEDIATE_SHORT, "column-head"),
+                cell("paraprotein\n" + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT, "column-head"),
+                cell("serum viscosity\n" + ExchangeProjection.IMMEDIATE_SHORT + " (projection)", "column-head"),
+                cell("serum viscosity\n" + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT + " (projection)",
+                        "column-head"));
         row = 1;
         for (SheetContent.ExchangeLine e : c.exchanges()) {
             exchange.addRow(row++, cell(e.plasmaVolumes(), "row-value"), cell(e.volume(), "row-value"),
-                    cell(e.intravascularLeft(), "row-value"), cell(e.paraproteinAfter(), "row-value"),
-                    cell(e.viscosityAfter(), "row-value"));
+                    cell(e.intravascularLeft(), "row-value"), cell(e.paraproteinImmediate(), "row-value"),
+                    cell(e.paraproteinAfterRedistribution(), "row-value"), cell(e.viscosityImmediate(), "row-value"),
+                    cell(e.viscosityAfterRedistribution(), "row-value"));
         }
         GridPane leuka = grid("leukapheresis");
         row = 0;
         for (SheetContent.Row r : c.leukapheresis()) {
             leuka.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
         }
-        apheresis.getChildren().addAll(volumes, subheading("Plasma exchange (one-compartment model)"), exchange,
-                subheading("Leukapheresis"), leuka);
+        apheresis.getChildren().addAll(volumes, subheading("Plasma exchange: right after and after redistribution"),
+                exchange, subheading("Leukapheresis"), leuka);
         c.apheresisNotes().forEach(n -> apheresis.getChildren().add(cell("NOTE: " + n, "apheresis-note")));
     }
 

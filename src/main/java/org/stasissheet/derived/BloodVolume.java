@@ -1,11 +1,11 @@
-package org.stasissheet.apheresis;
+package org.stasissheet.derived;
 
 import java.util.Objects;
 import org.stasissheet.intake.Sex;
 
 /**
  * Blood and plasma volume formulas in litres. Pure arithmetic with checked arguments; choosing whether a formula
- * applies to a patient is {@link ApheresisPlanner}'s job.
+ * applies to a patient is {@link CaseQuantities}' job.
  */
 public final class BloodVolume {
     private BloodVolume() {

@@ -1,4 +1,4 @@
-package org.stasissheet.apheresis;
+package org.stasissheet.derived;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
