@@ -79,10 +79,21 @@ public final class ApheresisPlanner {
         return hematocrit.map(h -> BloodVolume.kaplanPlasmaLitres(weightKg, h));
     }
 
+    /**
+     * Why APL gets no leukapheresis numbers: it can precipitate fatal bleeding in the APL coagulopathy (Blum &amp;
+     * Porcu 2007; Sanz et al. 2009, III-B).
+     */
+    public static final String APL_NO_LEUKAPHERESIS = "APL: leukapheresis is discouraged because it can precipitate"
+            + " fatal bleeding in the coagulopathy (Blum & Porcu 2007; European LeukemiaNet, Sanz et al. 2009), so no"
+            + " leukapheresis numbers are offered; cytoreduce with drugs";
+
     private static LeukapheresisPlan leukapheresis(Case c, Estimate<Double> bloodVolume, RuleSet rules) {
         if (c.condition().leukemia() == Leukemia.NONE) {
             String reason = "no leukemia recorded: leukapheresis numbers are not offered";
             return new LeukapheresisPlan(Estimate.unknown(reason), Estimate.unknown(reason));
+        }
+        if (c.condition().leukemia() == Leukemia.APL) {
+            return new LeukapheresisPlan(Estimate.unknown(APL_NO_LEUKAPHERESIS), Estimate.unknown(APL_NO_LEUKAPHERESIS));
         }
         double low = rules.value(EstimateParameters.PROCESS_BLOOD_VOLUMES_LOW, "1");
         double high = rules.value(EstimateParameters.PROCESS_BLOOD_VOLUMES_HIGH, "1");

@@ -109,13 +109,13 @@ public final class CaseQuantities {
         }
         OptionalDouble v = c.labs().canonical(lab.get());
         if (v.isEmpty()) {
-            return Estimate.unknown("paraprotein not estimated after exchange: no labs." + lab.get().key()
+            return Estimate.unknown("paraprotein not estimated after exchange: no " + lab.get().label()
                     + " value for the " + c.condition().paraprotein().code() + " paraprotein");
         }
         return Estimate.known(v.getAsDouble());
     }
 
     private static String noIsotype() {
-        return "no paraprotein isotype recorded (condition.paraprotein is none)";
+        return "no paraprotein isotype recorded";
     }
 }

@@ -89,8 +89,12 @@ public final class FlowEstimator {
         for (double v : EXCHANGE_PLASMA_VOLUMES) {
             whatIfs.add(exchange(v, h, referenceH, referenceSv, sv, cell, wbc, fraction));
         }
-        for (double cut : LEUKAPHERESIS_REDUCTIONS) {
-            whatIfs.add(leukapheresis(cut, h, ratio, referenceH, cell, wbc, byDiameter));
+        // no leukapheresis what-ifs without a leukemia, nor in APL, where leukapheresis is discouraged
+        Leukemia type = c.condition().leukemia();
+        if (type != Leukemia.NONE && type != Leukemia.APL) {
+            for (double cut : LEUKAPHERESIS_REDUCTIONS) {
+                whatIfs.add(leukapheresis(cut, h, ratio, referenceH, cell, wbc, byDiameter));
+            }
         }
         return new FlowEstimates(referenceH, referenceSv, hematocrit, ratio, ratioBasis,
                 Estimate.known(byDiameter), Estimate.known(inVivo), leukocrit, whatIfs, FlowCaveats.ALL);

@@ -38,7 +38,7 @@ final class EstimatesText {
                     .append(projection(row.serumViscosity(), "")).append(NL);
         }
         line(sb, "Leukapheresis, blood to process", range(plan.leukapheresis().processVolumeL(), " L"));
-        line(sb, "Leukapheresis, WBC after one", range(plan.leukapheresis().wbcAfter(), " x10^9/L"));
+        line(sb, "Leukapheresis, WBC after one", range(plan.leukapheresis().wbcAfter(), " ×10⁹/L"));
         plan.notes().forEach(n -> sb.append("  * ").append(n).append(NL));
         sb.append(NL);
     }

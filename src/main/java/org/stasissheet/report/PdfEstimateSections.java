@@ -201,7 +201,7 @@ final class PdfEstimateSections {
         row(pdf, l, "Leukapheresis: blood volume to process [" + leuka + "]",
                 known(plan.leukapheresis().processVolumeL(), r -> range(r) + " L"));
         row(pdf, l, "Leukapheresis: white count after one procedure [" + leuka + "]",
-                known(plan.leukapheresis().wbcAfter(), r -> range(r) + " 10*9/L"));
+                known(plan.leukapheresis().wbcAfter(), r -> range(r) + " ×10⁹/L"));
         doc.add(l);
         for (String note : plan.notes()) {
             doc.add(pdf.text("• " + note, pdf.small()));

@@ -30,4 +30,25 @@ class AssessorEstimatesTest {
         assertTrue(w.apheresis().bloodVolumeL().whyUnknown().isPresent());
         assertTrue(w.apheresis().plasmaVolumeL().whyUnknown().isPresent());
     }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0}: leukapheresis offered {1}")
+    @org.junit.jupiter.params.provider.CsvSource({"AML, true", "ALL, true", "APL, false", "none, false"})
+    @DisplayName("no leukapheresis numbers or what-ifs in APL (Blum & Porcu 2007; ELN 2009) or without a leukemia")
+    void leukapheresisOnlyWhereItMayHelp(String type, boolean offered) {
+        org.stasissheet.intake.Case base = EstimateFixtures.formatExample();
+        org.stasissheet.intake.Condition k = base.condition();
+        org.stasissheet.intake.Case c = new org.stasissheet.intake.Case(base.patient(),
+                new org.stasissheet.intake.Condition(k.paraprotein(), org.stasissheet.intake.Enums.parse(
+                        org.stasissheet.intake.Leukemia.class, type).orElseThrow(), false, k.cryoglobulin(),
+                        k.therapyStarted()),
+                base.labs().with(org.stasissheet.intake.Measurement.of(org.stasissheet.measure.Analyte.WBC, 150,
+                        "10*9/L")), base.baseline(), base.findings(), base.plan(), base.assessedAt(), base.assessor(),
+                base.extraJson());
+        Worksheet w = Assessor.assess(c, EstimateFixtures.rules());
+        assertEquals(offered, w.apheresis().leukapheresis().wbcAfter().isKnown());
+        assertEquals(offered, w.flow().whatIfs().stream().anyMatch(x -> x.id().startsWith("leukapheresis")));
+        if (type.equals("APL")) {
+            assertTrue(w.apheresis().leukapheresis().wbcAfter().whyUnknown().orElseThrow().contains("discouraged"));
+        }
+    }
 }
