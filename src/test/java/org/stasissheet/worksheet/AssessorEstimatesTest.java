@@ -46,7 +46,7 @@ class AssessorEstimatesTest {
                 base.extraJson());
         Worksheet w = Assessor.assess(c, EstimateFixtures.rules());
         assertEquals(offered, w.apheresis().leukapheresis().wbcAfter().isKnown());
-        assertEquals(offered, w.flow().whatIfs().stream().anyMatch(x -> x.id().startsWith("leukapheresis")));
+        assertEquals(offered, w.flow().whatIf().stream().anyMatch(x -> x.id().startsWith("leukapheresis")));
         if (type.equals("APL")) {
             assertTrue(w.apheresis().leukapheresis().wbcAfter().whyUnknown().orElseThrow().contains("discouraged"));
         }
