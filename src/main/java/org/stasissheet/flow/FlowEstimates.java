@@ -35,4 +35,29 @@ public record FlowEstimates(double referenceHematocrit, double referenceSerumVis
         whatIf = List.copyOf(whatIf);
         caveats = List.copyOf(caveats);
     }
+
+    /** What relative flow means, in the one wording every output uses. */
+    public String meaning() {
+        return "Relative flow = flow of the patient's blood ÷ flow of reference blood (hematocrit "
+                + org.stasissheet.measure.Numbers.plain(referenceHematocrit) + ", serum viscosity "
+                + org.stasissheet.measure.Numbers.plain(referenceSerumViscosity)
+                + ") at the same pressure and vessel size; 1 means as in the reference blood.";
+    }
+
+    /**
+     * When the patient's blood flows more easily than the reference somewhere, why, and what that does not mean: a
+     * low hematocrit (anaemia) lowers the viscosity, but white-cell plugging and red-cell aggregation are not in the
+     * model, so it never says the microcirculation is safe.
+     */
+    public java.util.Optional<String> aboveReference() {
+        java.util.OptionalDouble max = byDiameter.known().stream().flatMap(List::stream)
+                .mapToDouble(FlowPoint::relativeFlow).max();
+        if (max.isEmpty() || max.getAsDouble() <= 1) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of("Flow reaches " + org.stasissheet.measure.Numbers.rounded(max.getAsDouble(), 2)
+                + " × the reference because the hematocrit is below the reference (anaemia lowers the blood's"
+                + " viscosity); this does not mean the small vessels are safe: white-cell plugging and red-cell"
+                + " aggregation are not modelled.");
+    }
 }

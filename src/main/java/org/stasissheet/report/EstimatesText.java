@@ -46,10 +46,8 @@ final class EstimatesText {
     static void flow(StringBuilder sb, FlowEstimates f) {
         sb.append("MICROVASCULAR FLOW (illustration, not a measurement)").append(NL);
         f.caveats().forEach(c -> sb.append("  ! ").append(c).append(NL));
-        sb.append("  Relative flow = patient / reference blood (hematocrit ")
-                .append(Numbers.plain(f.referenceHematocrit())).append(", serum viscosity ")
-                .append(Numbers.plain(f.referenceSerumViscosity()))
-                .append(") at the same pressure and vessel size.").append(NL);
+        sb.append("  ").append(f.meaning()).append(NL);
+        f.aboveReference().ifPresent(n -> sb.append("  ").append(n).append(NL));
         sb.append("  Plasma ratio: ").append(f.plasmaRatioBasis()).append(NL);
         if (!(f.byDiameter() instanceof Estimate.Known<List<FlowPoint>> known)) {
             sb.append("  ").append(f.byDiameter().whyUnknown().orElseThrow()).append(NL).append(NL);

@@ -57,7 +57,8 @@ final class PdfEstimateSections {
         int poiseuille = pdf.sources().cite(FlowSources.POISEUILLE);
         int vitro = pdf.sources().cite(FlowSources.PRIES_1992);
         int vivo = pdf.sources().cite(FlowSources.PRIES_1994);
-        doc.add(pdf.loose(pdf.text("Flow through a vessel at the same pressure, patient ÷ reference [" + poiseuille + "]; "
+        doc.add(pdf.loose(pdf.text(flow.meaning() + flow.aboveReference().map(n -> " " + n).orElse("")
+                + " [" + poiseuille + "]; "
                 + "apparent viscosity = plasma ratio × blood viscosity law [" + vitro + "], [" + vivo + "]. "
                 + "Hematocrit used " + flow.hematocrit().known().map(h -> Numbers.rounded(h, 3)).orElse("—")
                 + ", plasma ratio " + Numbers.rounded(flow.plasmaRatio(), 3) + " (" + flow.plasmaRatioBasis()

@@ -51,4 +51,18 @@ class AssessorEstimatesTest {
             assertTrue(w.apheresis().leukapheresis().wbcAfter().whyUnknown().orElseThrow().contains("discouraged"));
         }
     }
+
+    @Test
+    @DisplayName("flow above the reference from anaemia is explained, never read as safe small vessels")
+    void aboveReferenceExplained() {
+        // the invented demo case samples/cll-extreme.json: hematocrit below the reference 0.45, WBC 612
+        org.stasissheet.intake.Case c = ((org.stasissheet.intake.CaseReader.Accepted) org.stasissheet.files.CaseFiles
+                .read(java.nio.file.Path.of("samples/cll-extreme.json"))).c();
+        Worksheet w = Assessor.assess(c, EstimateFixtures.rules());
+        String note = w.flow().aboveReference().orElseThrow();
+        assertTrue(note.contains("white-cell plugging") && note.contains("not modelled"), note);
+        assertTrue(w.flow().meaning().startsWith("Relative flow = flow of the patient's blood ÷ flow of reference"));
+        assertTrue(Assessor.assess(EstimateFixtures.formatExample(), EstimateFixtures.rules()).flow().meaning()
+                .equals(w.flow().meaning()), "one wording");
+    }
 }

@@ -181,9 +181,8 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                     w.assumptions());
         }
         List<String> notes = new ArrayList<>();
-        notes.add("Relative flow = reference blood ÷ patient (hematocrit " + Numbers.plain(f.referenceHematocrit())
-                + ", serum viscosity " + Numbers.plain(f.referenceSerumViscosity())
-                + ") at the same pressure and vessel size; 1 means as in the reference blood.");
+        notes.add(f.meaning());
+        f.aboveReference().ifPresent(notes::add);
         notes.add("Plasma ratio: " + f.plasmaRatioBasis());
         f.leukocrit().known().ifPresent(l -> notes.add("Leukocrit " + Numbers.rounded(l.leukocritLow(), 3) + "–"
                 + Numbers.rounded(l.leukocritHigh(), 3) + " = WBC " + Numbers.rounded(l.wbc(), 3) + " ×10⁹/L × "
