@@ -12,10 +12,12 @@ import com.tngtech.archunit.lang.ArchRule;
 class ArchitectureTest {
     private static final String[] CORE = {
         "org.stasissheet.measure..", "org.stasissheet.intake..", "org.stasissheet.rules..",
-        "org.stasissheet.flow..", "org.stasissheet.apheresis..", "org.stasissheet.worksheet.."
+        "org.stasissheet.flow..", "org.stasissheet.apheresis..", "org.stasissheet.worksheet..",
+        "org.stasissheet.labs.."
     };
     private static final String[] ADAPTERS = {
-        "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui.."
+        "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui..",
+        "org.stasissheet.interop.."
     };
 
     @ArchTest
@@ -40,6 +42,11 @@ class ArchitectureTest {
     static final ArchRule onlyTheFormKnowsJavaFx = noClasses().that().resideOutsideOfPackage("org.stasissheet.ui..")
             .should().dependOnClassesThat().resideInAnyPackage("javafx..")
             .because("the command line must run without loading JavaFX");
+
+    @ArchTest
+    static final ArchRule onlyInteropKnowsHapi = noClasses().that().resideOutsideOfPackage("org.stasissheet.interop..")
+            .should().dependOnClassesThat().resideInAnyPackage("ca.uhn..", "org.hl7..")
+            .because("the FHIR and HL7 libraries stay behind one adapter, loaded only by the commands that use it");
 
     @ArchTest
     static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")
