@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
                 + "and licensed practice.",
         subcommands = {AssessCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
-                RulesCommand.class})
+                RulesCommand.class, LabsCommand.class, ExportCommand.class})
 public final class StasisCommand implements Runnable {
 
     @CommandLine.Spec
