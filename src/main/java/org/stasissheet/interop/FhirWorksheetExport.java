@@ -139,7 +139,9 @@ public final class FhirWorksheetExport {
         o.setValue(new Quantity().setValue(new BigDecimal(org.stasissheet.measure.Numbers.plain(m.entered().value())))
                 .setUnit(m.unitOption().display()).setSystem(UCUM).setCode(m.entered().unit()));
         if (m.analyte() == Analyte.SERUM_VISCOSITY) {
-            o.addNote().setText("Compared on the scale the laboratory reported (cP or relative to water).");
+            o.addNote().setText("Compared on the scale the laboratory reported (cP or relative to water)."
+                    + m.temperature().map(t -> " Measured at " + org.stasissheet.measure.Numbers.plain(t.value())
+                    + " °C.").orElse(" Measuring temperature not recorded."));
         }
         return o;
     }

@@ -47,7 +47,7 @@ public final class Labels {
                 "Leukozyten", "leucocitos", "leucociti", "leukocyten", "leukocyter", "globules blancs", "TLC"));
         m.put(Analyte.BLASTS, List.of("blasts", "blast", "blast cells", "% blasts", "blasts %", "circulating blasts",
                 "Blasten", "blastes", "blastos", "blasti", "blastcellen"));
-        m.put(Analyte.HEMATOCRIT, List.of("Hct", "hematocrit", "haematocrit", "Hkt", "Hämatokrit", "hématocrite",
+        m.put(Analyte.HEMATOCRIT, List.of("Hct", "hematocrit", "haematocrit", "Hkt", "Hämatokrit", "Haematokrit", "hématocrite",
                 "hematocrito", "ematocrito", "hematocriet", "PCV", "packed cell volume", "EVF"));
         m.put(Analyte.HEMOGLOBIN, List.of("Hb", "Hgb", "hemoglobin", "haemoglobin", "Hämoglobin", "hémoglobine",
                 "hemoglobina", "emoglobina", "hemoglobine", "Hb total"));
@@ -56,7 +56,7 @@ public final class Labels {
                 "trombocitos", "PLT count"));
         m.put(Analyte.POTASSIUM, List.of("K", "K+", "potassium", "Kalium", "potasio", "potassio", "kalium (K)"));
         m.put(Analyte.SODIUM, List.of("Na", "Na+", "sodium", "Natrium", "sodio"));
-        m.put(Analyte.URIC_ACID, List.of("uric acid", "urate", "Harnsäure", "acide urique", "ácido úrico",
+        m.put(Analyte.URIC_ACID, List.of("uric acid", "urate", "Harnsäure", "Harnsaeure", "acide urique", "ácido úrico",
                 "acido urico", "urinezuur", "urat", "urinsyra"));
         m.put(Analyte.PHOSPHATE, List.of("phosphate", "phosphorus", "phos", "PO4", "inorganic phosphate",
                 "phosphate, inorganic", "Phosphat", "anorganisches Phosphat", "phosphore", "fosfato", "fósforo",

@@ -156,8 +156,13 @@ public final class ValueText {
         }
         Measurement m = measurement(analyte, numbers.get(0).multiply(unit.get().factor()), ucum);
         if (analyte.isPlausible(m.canonical())) {
-            return new ValueReading.Understood(
-                    new LabLine.Taken(where, lineText, m, flag, range, unit.get().note(), Optional.empty()));
+            String note = unit.get().note();
+            if (analyte == Analyte.SERUM_VISCOSITY) {
+                // a report line carries no measuring temperature; with a cryoglobulin a cooled sample reads low
+                note = (note.isEmpty() ? "" : note + "; ") + "no measuring temperature came with it: add it if known";
+            }
+            return new ValueReading.Understood(new LabLine.Taken(where, lineText, m, flag, range, note,
+                    Optional.empty()));
         }
         List<UnitOption> alternatives = analyte.unitsMakingPlausible(m.entered().value(), m.unitOption());
         String implausible = Numbers.plain(m.entered().value()) + " " + m.unitOption().display()
