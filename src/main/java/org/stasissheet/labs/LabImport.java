@@ -116,9 +116,6 @@ public record LabImport(Source source, List<LabLine> lines) {
         }
         Labs labs = base.labs();
         Patient patient = base.patient();
-        ObjectNode extra = extraObject(base.extraJson());
-        ObjectNode values = extra.get(EXTRA_KEY) instanceof ObjectNode earlier
-                && earlier.get("values") instanceof ObjectNode v ? v.deepCopy() : MAPPER.createObjectNode();
         Set<Analyte> seen = EnumSet.noneOf(Analyte.class);
         for (LabLine.Taken t : taken()) {
             if (!seen.add(t.analyte())) {
@@ -134,6 +131,20 @@ public record LabImport(Source source, List<LabLine> lines) {
             } else {
                 labs = labs.with(m);
             }
+        }
+        return new Case(patient, base.condition(), labs, base.baseline(), base.findings(), base.plan(),
+                base.assessedAt(), base.assessor(), recordOrigins(base.extraJson()));
+    }
+
+    /**
+     * The {@code extra} object with, under {@code labImport.values}, where each taken value came from (source,
+     * line or resource, time, flag, range, how it was read); other keys and earlier origins are kept.
+     */
+    public String recordOrigins(String extraJson) {
+        ObjectNode extra = extraObject(extraJson);
+        ObjectNode values = extra.get(EXTRA_KEY) instanceof ObjectNode earlier
+                && earlier.get("values") instanceof ObjectNode v ? v.deepCopy() : MAPPER.createObjectNode();
+        for (LabLine.Taken t : taken()) {
             ObjectNode origin = values.putObject(t.analyte().key());
             origin.put("from", source.code());
             origin.put("where", t.where());
@@ -145,8 +156,7 @@ public record LabImport(Source source, List<LabLine> lines) {
         ObjectNode record = MAPPER.createObjectNode();
         record.set("values", values);
         extra.set(EXTRA_KEY, record);
-        return new Case(patient, base.condition(), labs, base.baseline(), base.findings(), base.plan(),
-                base.assessedAt(), base.assessor(), extra.toString());
+        return extra.toString();
     }
 
     /** "labs.wbc: 150 10*9/L → 182.4 10*9/L" for every value {@link #applyTo} would overwrite. */
