@@ -166,7 +166,7 @@ public final class MainWindow {
     /** Opens the import window: paste or open a report, preview, answer, accept. */
     public LabImportWindow importLabs() {
         LabImportWindow w = new LabImportWindow(stage, near -> shell.chooseLabReport(near),
-                labLanding::land, stage.getScene().getStylesheets());
+                labLanding::current, labLanding::land, stage.getScene().getStylesheets());
         w.show();
         return w;
     }

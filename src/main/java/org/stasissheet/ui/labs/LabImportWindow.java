@@ -34,7 +34,7 @@ import org.stasissheet.worksheet.Cautions;
  */
 public final class LabImportWindow {
     private final Stage stage = new Stage();
-    private final LabPreview preview = new LabPreview();
+    private final LabPreview preview;
     private final Label status = new Label();
 
     /**
@@ -42,7 +42,9 @@ public final class LabImportWindow {
      * @param onAccept   receives the answered import; the window closes after it
      */
     public LabImportWindow(Window owner, Function<Optional<Path>, Optional<Path>> chooseFile,
+                           Function<org.stasissheet.measure.Analyte, String> current,
                            Consumer<LabImport> onAccept, java.util.List<String> stylesheets) {
+        preview = new LabPreview(current);
         stage.initOwner(owner);
         stage.initModality(Modality.WINDOW_MODAL);
         stage.setTitle("Import lab results");

@@ -37,14 +37,25 @@ public final class LabLanding {
         return canUndo.getReadOnlyProperty();
     }
 
+    /** What the form holds now for an analyte, as "150 10*9/L"; empty when the field is empty. */
+    public String current(org.stasissheet.measure.Analyte analyte) {
+        FieldSpec spec = entry.field(path(analyte)).spec();
+        FormState now = entry.snapshot();
+        String text = now.get(spec.valueKey()).strip();
+        return text.isEmpty() ? "" : text + " " + now.get(spec.unitKey());
+    }
+
+    private static String path(org.stasissheet.measure.Analyte analyte) {
+        return (analyte.isBodyMeasure() ? "patient." : "labs.") + analyte.key();
+    }
+
     /** Fills the fields of every taken value; returns how many fields changed. */
     public int land(LabImport accepted) {
         FormState now = entry.snapshot();
         Map<String, String> previous = new LinkedHashMap<>();
         FormState next = now;
         for (LabLine.Taken t : accepted.taken()) {
-            FieldSpec spec = entry.field((t.analyte().isBodyMeasure() ? "patient." : "labs.") + t.analyte().key())
-                    .spec();
+            FieldSpec spec = entry.field(path(t.analyte())).spec();
             previous.put(spec.valueKey(), now.get(spec.valueKey()));
             previous.put(spec.unitKey(), now.get(spec.unitKey()));
             next = next.with(spec.valueKey(), Numbers.plain(t.value().entered().value()))

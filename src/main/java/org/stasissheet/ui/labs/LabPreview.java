@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.function.Function;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.BooleanBinding;
 import javafx.beans.property.ObjectProperty;
@@ -17,6 +18,7 @@ import javafx.collections.ObservableList;
 import org.stasissheet.labs.LabImport;
 import org.stasissheet.labs.LabLine;
 import org.stasissheet.labs.ReportText;
+import org.stasissheet.measure.Analyte;
 import org.stasissheet.measure.Numbers;
 
 /**
@@ -50,8 +52,11 @@ public final class LabPreview {
     private final ObservableList<Question> questions = FXCollections.observableArrayList();
     private final ObjectProperty<Integer> answerTicks = new SimpleObjectProperty<>(this, "answerTicks", 0);
     private final BooleanBinding acceptable;
+    private final Function<Analyte, String> current;
 
-    public LabPreview() {
+    /** @param current what the form holds now for an analyte ("150 10*9/L"), empty when nothing */
+    public LabPreview(Function<Analyte, String> current) {
+        this.current = Objects.requireNonNull(current, "current");
         text.addListener((o, was, now) -> show(now.isBlank() ? Optional.empty() : Optional.of(ReportText.read(now))));
         acceptable = Bindings.createBooleanBinding(this::canAccept, reading, answerTicks);
     }
@@ -86,7 +91,7 @@ public final class LabPreview {
         read.ifPresent(r -> {
             for (int i = 0; i < r.lines().size(); i++) {
                 LabLine line = r.lines().get(i);
-                list.add(row(line));
+                list.add(row(line, current));
                 if (line instanceof LabLine.Asked asked) {
                     List<Answer> answers = new ArrayList<>();
                     asked.options().forEach(o -> answers.add(new Answer(o.label(), Optional.of(o))));
@@ -124,12 +129,14 @@ public final class LabPreview {
         return allAnswered && somethingToTake;
     }
 
-    private static Row row(LabLine line) {
+    private static Row row(LabLine line, Function<Analyte, String> current) {
         Objects.requireNonNull(line, "line");
         if (line instanceof LabLine.Taken t) {
             var m = t.value();
             String canonical = Numbers.rounded(m.canonical(), 6) + " " + m.analyte().canonicalOption().display();
-            String outcome = "will be imported" + (t.flag().isEmpty() ? "" : "; flag " + t.flag())
+            String now = current.apply(m.analyte());
+            String outcome = "will be imported" + (now.isEmpty() ? "" : ", replacing " + now)
+                    + (t.flag().isEmpty() ? "" : "; flag " + t.flag())
                     + (t.note().isEmpty() ? "" : "; " + t.note());
             return new Row(t.where(), m.analyte().label(), Numbers.plain(m.entered().value()),
                     m.unitOption().display() + " (" + m.entered().unit() + ")", canonical, outcome, t.text());

@@ -71,6 +71,8 @@ class LabImportFormTest {
         assertEquals("×10⁹/L (10*9/L)", wbc.unit());
         assertEquals("182.4 ×10⁹/L", wbc.canonical());
         assertEquals("6.8", table.getItems().get(1).value());
+        String wbcNow = field("labs.wbc").textProperty().get();
+        assertTrue(wbcNow.isBlank() || wbc.outcome().contains("replacing " + wbcNow), wbc.outcome());
         assertTrue(table.getItems().get(3).outcome().startsWith("NOT IMPORTED"), table.getItems().get(3).outcome());
         Label caution = robot.lookup("#lab-caution").query();
         assertTrue(caution.getText().contains("never replaces, clinical judgement"));
