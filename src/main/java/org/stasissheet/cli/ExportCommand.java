@@ -20,14 +20,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "export", mixinStandardHelpOptions = true,
         description = "Write the assessment in a standard form for the patient record.",
         subcommands = ExportCommand.Fhir.class)
-final class ExportCommand implements Runnable {
-    @Spec
-    CommandSpec spec;
-
-    @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
-    }
+final class ExportCommand extends CommandGroup {
 
     @Command(name = "fhir", mixinStandardHelpOptions = true,
             description = {"Write a FHIR R4 Bundle (collection): a DiagnosticReport (final, the worksheet PDF as "

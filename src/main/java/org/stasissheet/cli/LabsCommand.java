@@ -24,14 +24,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "labs", mixinStandardHelpOptions = true,
         description = "Lab results from a laboratory report into a case.",
         subcommands = LabsCommand.Import.class)
-final class LabsCommand implements Runnable {
-    @Spec
-    CommandSpec spec;
-
-    @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
-    }
+final class LabsCommand extends CommandGroup {
 
     @Command(name = "import", mixinStandardHelpOptions = true,
             description = {"Read lab results and write them into a case file. FILE is report text as copied from a "

@@ -91,6 +91,11 @@ class FhirRoundTripTest {
         }
     }
 
+    /** The bundle as HAPI writes it, read by the import. */
+    private static LabImport read(Bundle b) {
+        return LabReports.read(CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8));
+    }
+
     private static Labs withoutTemperatureOrLimit(Labs labs) {
         Labs out = labs.without(org.stasissheet.measure.Analyte.CREATININE_UPPER_LIMIT);
         for (Measurement m : out.values().values()) {
@@ -107,7 +112,7 @@ class FhirRoundTripTest {
         Bundle b = new Bundle().setType(Bundle.BundleType.SEARCHSET);
         b.addEntry().setResource(observation("6690-2", newer, "Patient/demo", "2026-03-05T23:10:00+01:00"));
         b.addEntry().setResource(observation("26464-8", older, "Patient/demo", "2026-03-05T08:00:00+01:00"));
-        LabImport read = LabReports.read(CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8));
+        LabImport read = read(b);
         assertEquals(1, read.taken().size());
         assertEquals(newer, read.taken().get(0).value());
         assertEquals(Optional.of("2026-03-05T23:10:00+01:00"), read.taken().get(0).time());
@@ -124,7 +129,7 @@ class FhirRoundTripTest {
         b.addEntry().setResource(observation("6298-4",
                 Measurement.of(org.stasissheet.measure.Analyte.POTASSIUM, 3.9, "mmol/L"), "Patient/demo",
                 "2026-03-05T23:10:00+01:00"));
-        LabImport read = LabReports.read(CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8));
+        LabImport read = read(b);
         assertEquals(1, read.questions().size());
         assertEquals(2, read.questions().get(0).options().size());
     }
@@ -139,8 +144,7 @@ class FhirRoundTripTest {
         b.addEntry().setResource(observation("718-7",
                 Measurement.of(org.stasissheet.measure.Analyte.HEMOGLOBIN, 7.4, "g/dL"), "Patient/demo-2",
                 "2026-03-05T23:10:00+01:00"));
-        ReportRefused refused = assertThrows(ReportRefused.class, () -> LabReports.read(
-                CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8)));
+        ReportRefused refused = assertThrows(ReportRefused.class, () -> read(b));
         assertTrue(refused.problems().get(0).contains("more than one subject"), refused.problems()::toString);
     }
 
@@ -152,7 +156,7 @@ class FhirRoundTripTest {
                 "Patient/demo", "2026-03-05T23:10:00+01:00");
         ((Quantity) o.getValue()).setComparator(Quantity.QuantityComparator.LESS_THAN);
         b.addEntry().setResource(o);
-        LabImport read = LabReports.read(CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8));
+        LabImport read = read(b);
         assertTrue(read.taken().isEmpty());
         LabLine.Left left = read.left().get(0);
         assertEquals(Optional.of(org.stasissheet.measure.Analyte.IGM), left.named());
@@ -165,7 +169,7 @@ class FhirRoundTripTest {
         b.addEntry().setResource(observation("8302-2",
                 Measurement.of(org.stasissheet.measure.Analyte.HEIGHT, 181, "cm"), "Patient/demo",
                 "2026-03-05T23:10:00+01:00"));
-        LabImport read = LabReports.read(CTX.newJsonParser().encodeResourceToString(b).getBytes(StandardCharsets.UTF_8));
+        LabImport read = read(b);
         Patient p = read.applyTo(Case.EMPTY).patient();
         assertEquals(Optional.of(Measurement.of(org.stasissheet.measure.Analyte.HEIGHT, 181, "cm")), p.height());
     }
