@@ -45,7 +45,16 @@ class Hl7ResultsTest {
     @DisplayName("a message built with HAPI's own v2.5.1 model classes reads back")
     void hapiBuiltMessage_readsBack() throws Exception {
         ORU_R01 oru = new ORU_R01();
-        oru.initQuickstart("ORU", "R01", "P");
+        // the header by hand: HAPI's initQuickstart would draw a control id from a counter file in the working folder
+        var msh = oru.getMSH();
+        msh.getFieldSeparator().setValue("|");
+        msh.getEncodingCharacters().setValue("^~\\&");
+        msh.getMessageType().getMessageCode().setValue("ORU");
+        msh.getMessageType().getTriggerEvent().setValue("R01");
+        msh.getMessageType().getMessageStructure().setValue("ORU_R01");
+        msh.getMessageControlID().setValue("DEMO-1");
+        msh.getProcessingID().getProcessingID().setValue("P");
+        msh.getVersionID().getVersionID().setValue("2.5.1");
         oru.getPATIENT_RESULT().getPATIENT().getPID().getPatientIdentifierList(0).getIDNumber().setValue("DEMO-1");
         OBX obx = oru.getPATIENT_RESULT().getORDER_OBSERVATION().getOBSERVATION().getOBX();
         obx.getSetIDOBX().setValue("1");
