@@ -13,10 +13,11 @@ class ArchitectureTest {
     private static final String[] CORE = {
         "org.stasissheet.measure..", "org.stasissheet.intake..", "org.stasissheet.rules..",
         "org.stasissheet.derived..", "org.stasissheet.flow..", "org.stasissheet.apheresis..",
-        "org.stasissheet.worksheet.."
+        "org.stasissheet.worksheet..", "org.stasissheet.labs.."
     };
     private static final String[] ADAPTERS = {
-        "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui.."
+        "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui..",
+        "org.stasissheet.interop.."
     };
 
     @ArchTest
@@ -76,6 +77,11 @@ class ArchitectureTest {
             .should().dependOnClassesThat().resideInAnyPackage("org.stasissheet.flow..",
                     "org.stasissheet.apheresis..", "org.stasissheet.worksheet..")
             .because("derived quantities sit below flow and apheresis, so they must not import either");
+
+    @ArchTest
+    static final ArchRule onlyInteropKnowsHapi = noClasses().that().resideOutsideOfPackage("org.stasissheet.interop..")
+            .should().dependOnClassesThat().resideInAnyPackage("ca.uhn..", "org.hl7..")
+            .because("the FHIR and HL7 libraries stay behind one adapter, loaded only by the commands that use it");
 
     @ArchTest
     static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")

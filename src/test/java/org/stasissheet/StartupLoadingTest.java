@@ -28,8 +28,9 @@ class StartupLoadingTest {
 
     @ParameterizedTest(name = "stasis {0}")
     @ValueSource(strings = {"--help", "--version", "assess --help", "assess samples/igm-symptomatic.json",
-        "assess --json samples/cll-extreme.json", "note samples/aml-breathless.json", "rules list"})
-    @DisplayName("a command-line run loads no JavaFX and no PDF class")
+        "assess --json samples/cll-extreme.json", "note samples/aml-breathless.json", "rules list",
+        "labs --help", "export fhir --help"})
+    @DisplayName("a command-line run loads no JavaFX, no PDF class and no FHIR or HL7 class")
     void commandLine_loadsNeitherToolkitNorPdf(String args) throws Exception {
         List<String> loaded = classesLoadedBy(args.split(" "));
         assertTrue(loaded.stream().anyMatch(c -> c.startsWith("picocli.")), "sanity: the log lists the classes");
@@ -38,6 +39,7 @@ class StartupLoadingTest {
         assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isPdfOrFont).toList());
         assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isDatabase).toList(),
                 "only a register command loads the database classes");
+        assertEquals(List.of(), loaded.stream().filter(StartupLoadingTest::isFhirOrHl7).toList());
     }
 
     @Test
@@ -57,6 +59,27 @@ class StartupLoadingTest {
     static boolean isDatabase(String className) {
         return className.startsWith("org.flywaydb.") || className.startsWith("org.sqlite.")
                 || className.startsWith("org.postgresql.") || className.startsWith("org.stasissheet.register.store.");
+    }
+
+    @Test
+    @DisplayName("labs import loads the HL7 library only when it reads HL7, prints only its own lines, and no JavaFX")
+    void labsImport_loadsHapiOnlyWhenItReadsAMessage() throws Exception {
+        List<String> text = classesLoadedBy("labs", "import", "lab-reports/aml-night.txt", "-o",
+                dir.resolve("a.json").toString());
+        assertEquals(List.of(), text.stream().filter(StartupLoadingTest::isFhirOrHl7).toList(),
+                "pasted text needs no HAPI class");
+        List<String> hl7 = classesLoadedBy("labs", "import", "lab-reports/aml-night.hl7", "-o",
+                dir.resolve("b.json").toString());
+        assertTrue(hl7.stream().anyMatch(c -> c.startsWith("ca.uhn.hl7v2.")), "HAPI HL7 v2 was loaded");
+        assertEquals(List.of(), hl7.stream().filter(c -> c.startsWith("javafx.")).toList());
+        // the libraries' logging is bound to SLF4J's no-op: nothing but the command's own summary is printed
+        String printed = read(dir.resolve("out.txt"));
+        assertTrue(printed.lines().allMatch(l -> l.startsWith("read ") || l.startsWith("  ")
+                || l.startsWith("wrote ")), printed);
+    }
+
+    static boolean isFhirOrHl7(String className) {
+        return className.startsWith("ca.uhn.") || className.startsWith("org.hl7.");
     }
 
     @Test

@@ -98,7 +98,7 @@ public final class Inputs {
         return ((LoadResult.Loaded) result).ruleSet();
     }
 
-    private static byte[] readLimited(Path file, int limit) {
+    static byte[] readLimited(Path file, int limit) {
         if (Files.isDirectory(file)) {
             throw unreadable(file, "it is a folder, not a case file");
         }

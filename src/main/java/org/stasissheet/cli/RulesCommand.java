@@ -20,14 +20,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "rules",
         description = "Validate or list a rule set.",
         subcommands = {RulesCommand.Check.class, RulesCommand.ListRules.class})
-final class RulesCommand implements Runnable {
-    @Spec
-    CommandSpec spec;
-
-    @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
-    }
+final class RulesCommand extends CommandGroup {
 
     @Command(name = "check",
             description = "Validate the rule set in DIR; print counts by topic and basis (exit 2 if refused).")

@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
                 + "and licensed practice.",
         subcommands = {AssessCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
-                RulesCommand.class, RegisterCommand.class})
+                RulesCommand.class, RegisterCommand.class, LabsCommand.class, ExportCommand.class})
 public final class StasisCommand implements Runnable {
     /** The one program name: the jar, the launcher and every usage line. */
     public static final String NAME = "stasis-sheet";

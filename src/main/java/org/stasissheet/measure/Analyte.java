@@ -147,6 +147,82 @@ public enum Analyte {
                 .toList();
     }
 
+    /**
+     * The LOINC codes that report this analyte (serum and plasma, mass and moles, automated and manual), first the
+     * one written on export. Empty for a value LOINC has no code for (the lab's upper limit of normal).
+     *
+     * <p>Basis: {@value #MEMORY} unless the entry names a page that prints the code with its name. The check
+     * digit of every code is verified in the tests (LOINC's mod-10 rule).
+     */
+    public List<LoincCode> loincCodes() {
+        return switch (this) {
+            case SERUM_VISCOSITY -> List.of(loinc("3128-6", "Viscosity of Serum", SECONDARY_MAP));
+            case IGM -> List.of(loinc("2472-9", "IgM [Mass/volume] in Serum or Plasma", MEMORY));
+            case IGG -> List.of(loinc("2465-3", "IgG [Mass/volume] in Serum or Plasma", MEMORY));
+            case IGA -> List.of(loinc("2458-8", "IgA [Mass/volume] in Serum or Plasma", MEMORY));
+            case TOTAL_PROTEIN -> List.of(loinc("2885-2", "Protein [Mass/volume] in Serum or Plasma", MEMORY));
+            case WBC -> List.of(
+                    loinc("6690-2", "Leukocytes [#/volume] in Blood by Automated count", MEMORY),
+                    loinc("26464-8", "Leukocytes [#/volume] in Blood", MEMORY),
+                    loinc("804-5", "Leukocytes [#/volume] in Blood by Manual count", MEMORY));
+            case BLASTS -> List.of(
+                    loinc("26446-5", "Blasts/100 leukocytes in Blood", MEMORY),
+                    loinc("709-6", "Blasts/100 leukocytes in Blood by Manual count", MEMORY));
+            case HEMATOCRIT -> List.of(
+                    loinc("4544-3", "Hematocrit [Volume Fraction] of Blood by Automated count", MEMORY),
+                    loinc("20570-8", "Hematocrit [Volume Fraction] of Blood", MEMORY));
+            case HEMOGLOBIN -> List.of(loinc("718-7", "Hemoglobin [Mass/volume] in Blood", MEMORY));
+            case PLATELETS -> List.of(
+                    loinc("777-3", "Platelets [#/volume] in Blood by Automated count", MEMORY),
+                    loinc("26515-7", "Platelets [#/volume] in Blood", MEMORY));
+            case POTASSIUM -> List.of(
+                    loinc("2823-3", "Potassium [Moles/volume] in Serum or Plasma", MEMORY),
+                    loinc("6298-4", "Potassium [Moles/volume] in Blood", MEMORY));
+            case SODIUM -> List.of(
+                    loinc("2951-2", "Sodium [Moles/volume] in Serum or Plasma", MEMORY),
+                    loinc("2947-0", "Sodium [Moles/volume] in Blood", MEMORY));
+            case URIC_ACID -> List.of(
+                    loinc("3084-1", "Urate [Mass/volume] in Serum or Plasma", MEMORY),
+                    loinc("14933-6", "Urate [Moles/volume] in Serum or Plasma", MEMORY));
+            case PHOSPHATE -> List.of(
+                    loinc("2777-1", "Phosphate [Mass/volume] in Serum or Plasma", MEMORY),
+                    loinc("14879-1", "Phosphate [Moles/volume] in Serum or Plasma", MEMORY));
+            case CALCIUM -> List.of(
+                    loinc("17861-6", "Calcium [Mass/volume] in Serum or Plasma", MEMORY),
+                    loinc("2000-8", "Calcium [Moles/volume] in Serum or Plasma", MEMORY));
+            case CREATININE -> List.of(
+                    loinc("2160-0", "Creatinine [Mass/volume] in Serum or Plasma", SECONDARY_VALUE_SET),
+                    loinc("14682-9", "Creatinine [Moles/volume] in Serum or Plasma", SECONDARY_VALUE_SET),
+                    loinc("38483-4", "Creatinine [Mass/volume] in Blood", SECONDARY_VALUE_SET));
+            case CREATININE_UPPER_LIMIT -> List.of();
+            case FIBRINOGEN -> List.of(
+                    loinc("3255-7", "Fibrinogen [Mass/volume] in Platelet poor plasma by Coagulation assay", MEMORY));
+            case PAO2 -> List.of(loinc("2703-7", "Oxygen [Partial pressure] in Arterial blood", MEMORY));
+            case SPO2 -> List.of(loinc("59408-5", "Oxygen saturation in Arterial blood by Pulse oximetry", MEMORY));
+            case HEIGHT -> List.of(loinc("8302-2", "Body height", FHIR_VITALS));
+            case WEIGHT -> List.of(loinc("29463-7", "Body weight", FHIR_VITALS));
+        };
+    }
+
+    /** The analyte a LOINC code reports, if the catalogue knows the code. */
+    public static Optional<Analyte> byLoinc(String code) {
+        return Arrays.stream(values()).filter(a -> a.loincCodes().stream().anyMatch(l -> l.code().equals(code)))
+                .findFirst();
+    }
+
+    static final String MEMORY = "from memory";
+    private static final String SECONDARY_MAP =
+            "published-secondary: printed with this name in a public laboratory-to-LOINC mapping table";
+    private static final String SECONDARY_VALUE_SET =
+            "published-secondary: printed with this name in a FHIR value set of serum creatinine codes "
+                    + "(expansion based on LOINC 2.82)";
+    private static final String FHIR_VITALS =
+            "published: FHIR R4 vital-signs profiles (in the R4 validation resources the tests load)";
+
+    private static LoincCode loinc(String code, String name, String basis) {
+        return new LoincCode(code, name, basis);
+    }
+
     /** The body measures under {@code patient}; every other analyte lives under {@code labs}. */
     public boolean isBodyMeasure() {
         return this == HEIGHT || this == WEIGHT;

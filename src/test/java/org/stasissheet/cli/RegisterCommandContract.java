@@ -60,7 +60,7 @@ abstract class RegisterCommandContract {
     @DisplayName("add, list, decide, conflict, history, export, triage --register: the whole round through the CLI")
     void everyCommand_endToEnd() throws Exception {
         String db = db();
-        assertEquals(ExitCode.DONE, run("register", "add", "samples/cll-extreme.json", "--procedure", "leukapheresis",
+        assertEquals(ExitCode.DONE, run("register", "add", "src/test/resources/cases/cll-review.json", "--procedure", "leukapheresis",
                 "--received", "2026-03-05T01:00:00Z", "--from", "Invented registrar", "--db", db), err::toString);
         assertEquals("1", out.toString().strip());
         assertEquals(ExitCode.DONE, run("register", "add", "samples/igm-symptomatic.json", "--procedure",

@@ -48,6 +48,12 @@ public final class ScriptedShell implements Shell {
     }
 
     @Override
+    public Optional<Path> chooseLabReport(Optional<Path> near) {
+        asked.add("lab report");
+        return Optional.ofNullable(files.poll());
+    }
+
+    @Override
     public Optional<Path> chooseRuleFolder(Optional<Path> near) {
         asked.add("rules");
         return Optional.ofNullable(files.poll());

@@ -59,6 +59,16 @@ public final class FxShell implements Shell {
     }
 
     @Override
+    public Optional<Path> chooseLabReport(Optional<Path> near) {
+        FileChooser c = chooser("Open a lab report", near);
+        c.getExtensionFilters().addAll(
+                new FileChooser.ExtensionFilter("Report text, FHIR bundles, HL7 v2 messages", "*.txt", "*.json",
+                        "*.hl7"),
+                new FileChooser.ExtensionFilter("All files", "*"));
+        return Optional.ofNullable(c.showOpenDialog(owner)).map(File::toPath);
+    }
+
+    @Override
     public Optional<Path> chooseCaseTarget(String suggestedName, Optional<Path> near) {
         FileChooser c = chooser("Save the case", near);
         c.setInitialFileName(suggestedName);

@@ -27,6 +27,8 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.stasissheet.ui.labs.LabImportWindow;
+import org.stasissheet.ui.labs.LabLanding;
 import org.stasissheet.ui.draft.Autosaver;
 import org.stasissheet.ui.draft.DraftStore;
 import org.stasissheet.ui.entry.EntryView;
@@ -55,6 +57,8 @@ public final class MainWindow {
     private final ObjectProperty<Preferences> preferences;
     private final BorderPane root = new BorderPane();
     private final FormSettings settings;
+    private final Shell shell;
+    private final LabLanding labLanding;
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -63,9 +67,10 @@ public final class MainWindow {
         preferences = new SimpleObjectProperty<>(this, "preferences", preferenceStore.load());
         drafts = new DraftStore(settings.dataFolder());
         background = new Background();
-        Shell shell = settings.shell().apply(stage);
+        shell = settings.shell().apply(stage);
 
         EntryViewModel entry = new EntryViewModel(preferences.get().units());
+        labLanding = new LabLanding(entry);
         RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
         autosaver = new Autosaver(drafts, background, entry.editsProperty(), session::caseJson,
@@ -155,6 +160,19 @@ public final class MainWindow {
         return preferences;
     }
 
+    /** Lands accepted lab imports in the form and undoes the last one. */
+    public LabLanding labLanding() {
+        return labLanding;
+    }
+
+    /** Opens the import window: paste or open a report, preview, answer, accept. */
+    public LabImportWindow importLabs() {
+        LabImportWindow w = new LabImportWindow(stage, near -> shell.chooseLabReport(near),
+                labLanding::current, labLanding::land, stage.getScene().getStylesheets());
+        w.show();
+        return w;
+    }
+
     public Stage stage() {
         return stage;
     }
@@ -192,8 +210,11 @@ public final class MainWindow {
                 stage.close();
             }
         });
-        file.getItems().addAll(newCase, open, recent, samples, new SeparatorMenuItem(), save, saveAs,
-                new SeparatorMenuItem(), quit);
+        MenuItem importLabs = item("_Import lab results…", "Shortcut+I", "action-import-labs", this::importLabs);
+        MenuItem undoLabs = item("_Undo the lab import", null, "action-undo-labs", labLanding::undo);
+        undoLabs.disableProperty().bind(labLanding.canUndoProperty().not());
+        file.getItems().addAll(newCase, open, recent, samples, new SeparatorMenuItem(), importLabs, undoLabs,
+                new SeparatorMenuItem(), save, saveAs, new SeparatorMenuItem(), quit);
 
         Menu sheet = new Menu("_Worksheet");
         MenuItem export = item("_Export PDF…", "Shortcut+E", "action-export", actions::exportPdf);

@@ -33,6 +33,9 @@ public interface Shell {
     /** Where to write the worksheet PDF. */
     Optional<Path> choosePdfTarget(String suggestedName, Optional<Path> near);
 
+    /** A lab report to import: report text, a FHIR R4 Bundle or an HL7 v2 message. */
+    Optional<Path> chooseLabReport(Optional<Path> near);
+
     /** A folder holding a local rule set. */
     Optional<Path> chooseRuleFolder(Optional<Path> near);
 

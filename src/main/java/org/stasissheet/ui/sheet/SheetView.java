@@ -83,6 +83,9 @@ public final class SheetView {
 
     private void show(SheetContent c) {
         badge.setText(c.ruleSetBadge());
+        // the hash is provenance, not a sentence: it stays one hover away
+        badge.setTooltip(c.worksheet().map(w -> new javafx.scene.control.Tooltip("SHA-256 "
+                + w.ruleSet().sha256())).orElse(null));
         local.setVisible(c.localProtocol());
         leftOut.setVisible(!c.leftOut().isEmpty());
         leftOut.setText("INCOMPLETE: this worksheet leaves out " + String.join(", ", c.leftOut())

@@ -21,15 +21,17 @@ final class RegisterFixtures {
     static final RuleSet SHIPPED = ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
     /** Flagged act now by the shipped rules (symptomatic IgM hyperviscosity). */
     static final String ACT_NOW_CASE = "igm-symptomatic.json";
-    /** Flagged review by the shipped rules. */
-    static final String REVIEW_CASE = "cll-extreme.json";
+    /** Flagged review (at most) by the shipped rules: an invented CLL case with a normal potassium (test resource). */
+    static final String REVIEW_CASE = "cll-review.json";
 
     private RegisterFixtures() {
     }
 
     static String caseJson(String sample) {
         try {
-            return Files.readString(Path.of("samples", sample), StandardCharsets.UTF_8);
+            Path demo = Path.of("samples", sample);
+            return Files.readString(Files.exists(demo) ? demo : Path.of("src/test/resources/cases", sample),
+                    StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

@@ -1,6 +1,7 @@
 package org.stasissheet.ui.app;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -47,11 +48,15 @@ class FormVerdictTest {
 
     private String shown(FxRobot robot, String verdict) {
         Label word = robot.lookup("#verdict-" + verdict + "-word").query();
-        return word.getText().substring(2); // after the marker: "▲ " raised, "· " not
+        return word.getText().substring(2); // after the mark: "● " raised, "○ " not
     }
 
-    private static String word(String code) {
-        return code.replace('-', ' ').toUpperCase(Locale.ROOT);
+    private static String word(org.stasissheet.rules.HyperviscosityVerdict v) {
+        return org.stasissheet.report.VerdictWords.hyperviscosity(v).toUpperCase(Locale.ROOT);
+    }
+
+    private static String word(org.stasissheet.rules.LeukostasisVerdict v) {
+        return org.stasissheet.report.VerdictWords.leukostasis(v).toUpperCase(Locale.ROOT);
     }
 
     private static Worksheet assess(byte[] json) {
@@ -63,7 +68,7 @@ class FormVerdictTest {
     void typingViscosity(FxRobot robot) throws Exception {
         Path sample = Path.of("samples", "igm-symptomatic.json");
         Worksheet before = Assessor.assess(((CaseReader.Accepted) CaseFiles.read(sample)).c(), SHIPPED);
-        assertTrue(shown(robot, "hyperviscosity").equals(word(before.hyperviscosity().assessment().code())),
+        assertTrue(shown(robot, "hyperviscosity").equals(word(before.hyperviscosity())),
                 shown(robot, "hyperviscosity"));
 
         TextField sv = robot.lookup("#labs-serumViscosity").query();
@@ -74,14 +79,14 @@ class FormVerdictTest {
         robot.write("1.5");
         WaitForAsyncUtils.waitForFxEvents();
         FormHarness.waitUntil(() -> !shown(robot, "hyperviscosity")
-                .equals(word(before.hyperviscosity().assessment().code())));
+                .equals(word(before.hyperviscosity())));
 
         ObjectNode edited = (ObjectNode) new ObjectMapper().readTree(Files.readAllBytes(sample));
         ((ObjectNode) edited.path("labs").path("serumViscosity")).put("value", 1.5);
         Worksheet after = assess(new ObjectMapper().writeValueAsBytes(edited));
         assertNotEquals(before.hyperviscosity().assessment(), after.hyperviscosity().assessment(),
                 "the sample must be one where the viscosity decides");
-        assertTrue(shown(robot, "hyperviscosity").equals(word(after.hyperviscosity().assessment().code())),
+        assertTrue(shown(robot, "hyperviscosity").equals(word(after.hyperviscosity())),
                 shown(robot, "hyperviscosity"));
     }
 
@@ -94,13 +99,19 @@ class FormVerdictTest {
             FormHarness.settle(window);
             Worksheet expected = Assessor.assess(((CaseReader.Accepted) CaseFiles.read(file)).c(), SHIPPED);
             assertEquals(Optional.of(file), window.session().documentProperty().get(), name);
-            assertTrue(shown(robot, "hyperviscosity").equals(word(expected.hyperviscosity().assessment().code())),
+            assertTrue(shown(robot, "hyperviscosity").equals(word(expected.hyperviscosity())),
                     name + ": " + shown(robot, "hyperviscosity"));
-            assertTrue(shown(robot, "leukostasis").startsWith(word(expected.leukostasis().probability().code())),
+            assertTrue(shown(robot, "leukostasis").startsWith(word(expected.leukostasis())),
                     name + ": " + shown(robot, "leukostasis"));
             String tl = shown(robot, "tumor-lysis");
-            assertTrue(tl.contains("LABORATORY " + yesNo(expected.tumorLysis().laboratory())), name + ": " + tl);
-            assertTrue(tl.contains("CLINICAL " + yesNo(expected.tumorLysis().clinical())), name + ": " + tl);
+            if (expected.tumorLysis().applies()) {
+                assertTrue(tl.contains("LABORATORY " + org.stasissheet.report.VerdictWords.laboratory(
+                        expected.tumorLysis()).toUpperCase(Locale.ROOT)), name + ": " + tl);
+                assertTrue(tl.contains("CLINICAL " + org.stasissheet.report.VerdictWords.clinical(
+                        expected.tumorLysis()).toUpperCase(Locale.ROOT)), name + ": " + tl);
+            } else {
+                assertTrue(tl.contains("NOT CHECKED"), name + ": " + tl);
+            }
             Worksheet shownSheet = window.session().completeWorksheetProperty().get().orElseThrow();
             assertEquals(expected.flags(), shownSheet.flags(), name);
             for (var flag : expected.flags()) {
@@ -111,9 +122,6 @@ class FormVerdictTest {
         }
     }
 
-    private static String yesNo(Optional<Boolean> b) {
-        return b.map(v -> v ? "YES" : "NO").orElse("UNDECIDED");
-    }
 
     @Test
     @DisplayName("regression: the flow chart keeps following edits after a garbage collection (its binding was collected)")
@@ -133,11 +141,13 @@ class FormVerdictTest {
     }
 
     @Test
-    @DisplayName("the rule-set badge shows name, version and short hash; the standing caution is always on screen")
+    @DisplayName("the rule-set badge shows name and version, the hash one hover away; the standing caution is always on screen")
     void badgeAndCaution(FxRobot robot) {
         Label badge = robot.lookup("#rule-set-badge").query();
-        assertTrue(badge.getText().contains(SHIPPED.provenance().name()), badge.getText());
-        assertTrue(badge.getText().contains(SHIPPED.provenance().shortHash()), badge.getText());
+        assertTrue(badge.getText().contains(SHIPPED.provenance().name() + " " + SHIPPED.provenance().version()),
+                badge.getText());
+        assertFalse(badge.getText().contains(SHIPPED.provenance().shortHash()), "no hash in the sentence");
+        assertEquals("SHA-256 " + SHIPPED.provenance().sha256(), badge.getTooltip().getText());
         Label caution = robot.lookup("#standing-caution").query();
         assertTrue(caution.getText().contains(org.stasissheet.worksheet.Cautions.SHORT));
         assertTrue(caution.isVisible());

@@ -61,7 +61,10 @@ class RegisterWindowTest {
     RegisterWindow window;
 
     static NewReferral referral(String sample, Instant received) throws Exception {
-        String json = Files.readString(Path.of("samples", sample), StandardCharsets.UTF_8);
+        return referralOf(Files.readString(Path.of("samples", sample), StandardCharsets.UTF_8), received);
+    }
+
+    static NewReferral referralOf(String json, Instant received) throws Exception {
         var sheet = Assessor.assess(((CaseReader.Accepted) CaseReader.read(json.getBytes(StandardCharsets.UTF_8))).c(),
                 SHIPPED);
         return new NewReferral(received, "Invented registrar", "Invented General, ward 7", Procedure.NOT_STATED,
@@ -76,7 +79,9 @@ class RegisterWindowTest {
     void start(Stage stage) throws Exception {
         db = Optional.of("jdbc:sqlite:" + data.resolve("register.sqlite"));
         Register r = other();
-        reviewEarly = r.add(referral("cll-extreme.json", T0));
+        // an invented CLL case with a normal potassium: its highest flag is a review (test resource)
+        reviewEarly = r.add(referralOf(Files.readString(Path.of("src/test/resources/cases/cll-review.json"),
+                StandardCharsets.UTF_8), T0));
         actNowLate = r.add(referral("igm-symptomatic.json", T0.plusSeconds(3600)));
         closed = r.add(referral("aml-breathless.json", T0.plusSeconds(60)));
         r.decide(new DecisionRequest(closed, OptionalInt.empty(), Decision.DECLINED,
