@@ -12,7 +12,7 @@ sleep 2
 DISPLAY=:98 java -cp "target/test-classes:target/classes:$(cat target/tour.classpath)" \
     'org.stasissheet.ui.ScreenshotTour$Run' | while read -r word n name; do
   if [ "$word" = "STEP" ]; then
-    sleep 2
+    sleep 4
     DISPLAY=:98 import -window root "target/form-$name.png"
     # keep each picture small: fewer colours, same size
     convert "target/form-$name.png" -colors 128 -strip "src/site/form-$name.png"

@@ -22,7 +22,7 @@ import org.stasissheet.cli.Inputs;
  * with a throw-away data folder; not a test.
  */
 public final class ScreenshotTour extends Application {
-    static final double PAUSE_SECONDS = 5;
+    static final double PAUSE_SECONDS = 8;
 
     /** The entry point lives outside the Application class, so the launcher does not ask for JavaFX modules. */
     public static final class Run {
