@@ -84,8 +84,8 @@ t_pdf=$(median_ms "$pdf")
 t_triage=$(median_ms "$triage")
 echo
 echo "java -version                  ${t_bare} ms"
-echo "stasis pdf (one demo case)     ${t_pdf} ms"
-echo "stasis triage (200 cases)      ${t_triage} ms"
+echo "stasis-sheet pdf (one case)     ${t_pdf} ms"
+echo "stasis-sheet triage (200 cases) ${t_triage} ms"
 echo
 echo "cold pdf / java -version       $(ratio "$t_pdf" "$t_bare")   (target <= 3)"
 echo "triage 200 / cold pdf          $(ratio "$t_triage" "$t_pdf")   (target <= 8)"

@@ -26,7 +26,7 @@ class StartupLoadingTest {
     @TempDir
     Path dir;
 
-    @ParameterizedTest(name = "stasis {0}")
+    @ParameterizedTest(name = "stasis-sheet {0}")
     @ValueSource(strings = {"--help", "--version", "assess --help", "assess samples/igm-symptomatic.json",
         "assess --json samples/cll-extreme.json", "note samples/aml-breathless.json", "rules list",
         "labs --help", "export fhir --help"})

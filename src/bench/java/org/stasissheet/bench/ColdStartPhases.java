@@ -41,7 +41,7 @@ public final class ColdStartPhases {
         long[] ms = new long[STEPS.length];
         long start = System.nanoTime();
 
-        // the command model and the parse, as `stasis pdf CASE -o OUT` builds them (nothing runs)
+        // the command model and the parse, as `stasis-sheet pdf CASE -o OUT` builds them (nothing runs)
         new CommandLine(new StasisCommand()).parseArgs("pdf", caseFile.toString(), "-o", "unused.pdf");
         start = lap(ms, 0, start);
 

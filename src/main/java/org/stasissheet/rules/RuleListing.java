@@ -59,7 +59,7 @@ public final class RuleListing {
      * The markdown list for README's limits section: every rule and parameter of the set whose basis is
      * {@code from-memory}, and the built-in from-memory parts of the leukostasis grading. README keeps it between
      * {@code <!-- from-memory:start -->} and {@code <!-- from-memory:end -->}; regenerate it with
-     * {@code stasis rules list --basis from-memory --markdown}.
+     * {@code stasis-sheet rules list --basis from-memory --markdown}.
      */
     public static String fromMemoryMarkdown(RuleSet set) {
         StringBuilder sb = new StringBuilder();

@@ -18,7 +18,7 @@ class FromMemoryReadmeTest {
     void readmeListIsCurrent() throws Exception {
         String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
         String generated = RuleListing.fromMemoryMarkdown(TestCases.SHIPPED);
-        String howTo = "Regenerate it with `stasis rules list --basis from-memory --markdown` and paste the output"
+        String howTo = "Regenerate it with `stasis-sheet rules list --basis from-memory --markdown` and paste the output"
                 + " between " + START + " and " + END + " in README.md's limits section.";
         int s = readme.indexOf(START);
         int e = readme.indexOf(END);
