@@ -426,7 +426,7 @@ public final class Actions {
     /** The file reads of {@link #openFile}, on the background thread. */
     static final class CaseOpening {
         /** The largest worksheet PDF read (the command line's limit too): 32 MiB. */
-        static final long MAX_PDF_BYTES = 32L << 20;
+        static final long MAX_PDF_BYTES = WorksheetPdfs.MAX_PDF_BYTES;
 
         private CaseOpening() {
         }
@@ -435,6 +435,10 @@ public final class Actions {
         static Opened read(Path file, boolean pdfByName) throws IOException {
             if (Files.isDirectory(file)) {
                 return new Opened(new byte[0], List.of(file.getFileName() + " is a folder, not a case file"));
+            }
+            if (!Files.isRegularFile(file)) {
+                // a FIFO would block the form for ever; a device never ends
+                return new Opened(new byte[0], List.of(file.getFileName() + " is not a regular file; it was not opened"));
             }
             long size = Files.size(file);
             if (size > MAX_PDF_BYTES || (!pdfByName && size > CaseReader.MAX_BYTES && !startsAsPdf(file))) {
