@@ -135,6 +135,9 @@ public final class WorksheetPdfs {
             return new IOException("not a readable worksheet PDF: its structure is nested too deeply");
         } catch (OutOfMemoryError e) {
             return new IOException("not a readable worksheet PDF: it ran out of memory while reading");
+        } catch (NullPointerException | ClassCastException | IndexOutOfBoundsException e) {
+            // the library met a missing or wrong-typed object where the format requires one
+            return new IOException("not a readable worksheet PDF: its structure is damaged or incomplete");
         } catch (RuntimeException | LinkageError e) {
             // the library's own exceptions, and classes it would need for features worksheets never use
             return new IOException("not a readable worksheet PDF (" + oneLine(e) + ")", e);
