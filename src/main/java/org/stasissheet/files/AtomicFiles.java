@@ -45,9 +45,12 @@ public final class AtomicFiles {
      */
     public static final java.time.Duration STALE_AFTER = java.time.Duration.ofMinutes(2);
 
-    /** The names {@link #createTemp} gives: a dot, the target's name (cut at 80), a dot, hex digits, ".tmp". */
+    /**
+     * The names {@link #createTemp} gives: a dot, the target's name (cut at 80), a dot, a random long as exactly 16
+     * hex digits, ".tmp"; a person's ".notes.1.tmp" never matches.
+     */
     private static final java.util.regex.Pattern TEMP_NAME =
-            java.util.regex.Pattern.compile("\\..{1,80}\\.[0-9a-f]{1,16}\\.tmp");
+            java.util.regex.Pattern.compile("\\..{1,80}\\.[0-9a-f]{16}\\.tmp");
 
     private AtomicFiles() {
     }
@@ -153,7 +156,7 @@ public final class AtomicFiles {
         for (int attempt = 0; ; attempt++) {
             // keep the temporary name within the usual 255-byte limit even for a long target name
             String stem = name.length() > 80 ? name.substring(0, 80) : name;
-            Path temp = folder.resolve("." + stem + "." + Long.toHexString(RANDOM.nextLong()) + ".tmp");
+            Path temp = folder.resolve("." + stem + "." + java.util.HexFormat.of().toHexDigits(RANDOM.nextLong()) + ".tmp");
             try {
                 Path created = Files.createFile(temp, attributes);
                 if (permissions != null) {

@@ -18,7 +18,6 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileTime;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
@@ -67,30 +66,9 @@ class ReliabilityTest {
         return Files.readString(p, StandardCharsets.UTF_8);
     }
 
-    /** summary.csv rows as cell lists (the quoting TriageSummary writes: RFC 4180). */
+    /** summary.csv's rows without the header, as cell lists (RFC 4180, parsed as TriageCommandTest does). */
     private static List<List<String>> rows(Path summary) throws IOException {
-        List<List<String>> rows = new ArrayList<>();
-        for (String line : read(summary).split("\r\n")) {
-            List<String> cells = new ArrayList<>();
-            StringBuilder cell = new StringBuilder();
-            boolean quoted = false;
-            for (int i = 0; i < line.length(); i++) {
-                char ch = line.charAt(i);
-                if (quoted && ch == '"' && i + 1 < line.length() && line.charAt(i + 1) == '"') {
-                    cell.append('"');
-                    i++;
-                } else if (ch == '"') {
-                    quoted = !quoted;
-                } else if (ch == ',' && !quoted) {
-                    cells.add(cell.toString());
-                    cell.setLength(0);
-                } else {
-                    cell.append(ch);
-                }
-            }
-            cells.add(cell.toString());
-            rows.add(cells);
-        }
+        List<List<String>> rows = TriageCommandTest.parse(read(summary));
         return rows.subList(1, rows.size());
     }
 
@@ -516,7 +494,7 @@ class ReliabilityTest {
             Path outDir = Files.createDirectories(tmp.resolve("out"));
             Path stale = Files.writeString(outDir.resolve(".igm.pdf.1a2b3c4d5e6f7081.tmp"), "half a PDF");
             Files.setLastModifiedTime(stale, FileTime.from(Instant.now().minus(AtomicFiles.STALE_AFTER).minusSeconds(5)));
-            Path fresh = Files.writeString(outDir.resolve(".aml.pdf.99.tmp"), "being written now");
+            Path fresh = Files.writeString(outDir.resolve(".aml.pdf.0123456789abcdef.tmp"), "being written now");
             Path mine = Files.writeString(outDir.resolve(".notes.tmp"), "someone else's file");
             Files.setLastModifiedTime(mine, FileTime.from(Instant.now().minusSeconds(3_600)));
 

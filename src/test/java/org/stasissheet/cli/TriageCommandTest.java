@@ -47,7 +47,7 @@ class TriageCommandTest {
     }
 
     /** The CSV's rows split into cells (RFC 4180, enough for these cells: quotes only around whole cells). */
-    private static List<List<String>> parse(String csv) {
+    static List<List<String>> parse(String csv) {
         List<List<String>> rows = new ArrayList<>();
         for (String line : csv.split("\r\n")) {
             List<String> cells = new ArrayList<>();
