@@ -14,6 +14,7 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.TimeUnit;
+import java.util.stream.Collectors;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -143,7 +144,8 @@ public final class Actions {
                     session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
                     remember(file);
                     markRunning();
-                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : ""));
+                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : "")
+                            + opened.warnings().stream().map(w -> ". Warning: " + w).collect(Collectors.joining()));
                     return;
                 }
             }
@@ -411,15 +413,19 @@ public final class Actions {
         return m.replaceAll("\\s*\\R\\s*", " ").trim();
     }
 
-    /** What opening a file gave: the case as JSON bytes, or why not. */
-    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf) {
+    /**
+     * What opening a file gave: the case as JSON bytes, or why not; {@code warnings} are what the reader should
+     * know about a case that was opened (a worksheet PDF without the digest of its case).
+     */
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
         Opened {
             Objects.requireNonNull(caseJson, "caseJson");
             problems = List.copyOf(problems);
+            warnings = List.copyOf(warnings);
         }
 
         Opened(byte[] caseJson, List<String> problems) {
-            this(caseJson, problems, false);
+            this(caseJson, problems, false, List.of());
         }
     }
 
@@ -448,7 +454,8 @@ public final class Actions {
             byte[] bytes = Files.readAllBytes(file);
             if (WorksheetPdfs.looksLikePdf(file, bytes)) {
                 try {
-                    return new Opened(WorksheetPdfs.extractCase(bytes), List.of(), true);
+                    WorksheetPdfs.ReadBack back = WorksheetPdfs.read(bytes);
+                    return new Opened(back.caseJson(), List.of(), true, back.warnings());
                 } catch (IOException e) {
                     return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
                 }
