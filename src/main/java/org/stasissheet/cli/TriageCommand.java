@@ -150,11 +150,9 @@ final class TriageCommand implements Callable<Integer> {
             n++;
             String name = entry.getFileName().toString();
             TriageRow row;
-            Optional<String> skip = notARead(entry, realOut);
-            if (skip.isPresent()) {
-                row = skip.get().startsWith(NOT_A_CASE)
-                        ? TriageRow.failed(name, TriageRow.Status.ERROR, skip.get().substring(NOT_A_CASE.length()))
-                        : TriageRow.failed(name, TriageRow.Status.SKIPPED, skip.get());
+            Optional<NotRead> notRead = notRead(entry, realOut);
+            if (notRead.isPresent()) {
+                row = TriageRow.failed(name, notRead.get().status(), notRead.get().why());
             } else {
                 Outcome outcome = triage(entry, ruleSet, options, seenCases, taken);
                 row = outcome.row();
@@ -194,40 +192,45 @@ final class TriageCommand implements Callable<Integer> {
         return ExitCode.DONE;
     }
 
-    /** Marks a refusal that is an error row (a case-file name that cannot be read) rather than a skipped entry. */
-    private static final String NOT_A_CASE = "error:";
+    /**
+     * An entry that is not read as a referral: an {@code error} row when its name says it is a case file (an
+     * unread referral may hide an emergency), a {@code skipped} row otherwise.
+     */
+    private record NotRead(TriageRow.Status status, String why) {
+        static NotRead of(boolean caseName, String why) {
+            return new NotRead(caseName ? TriageRow.Status.ERROR : TriageRow.Status.SKIPPED, why);
+        }
+    }
 
     /**
      * Why this entry is not read as a referral, or empty when it is one. Checked on the entry itself before any
      * file is opened, so a FIFO, a device or a link loop never blocks or misleads the batch.
      */
-    private static Optional<String> notARead(Path entry, Path realOut) {
+    private static Optional<NotRead> notRead(Path entry, Path realOut) {
         String name = entry.getFileName().toString();
         boolean caseName = isCaseName(name);
         if (Files.isSymbolicLink(entry)) {
             try {
                 entry.toRealPath();
             } catch (IOException e) {
-                return Optional.of((caseName ? NOT_A_CASE : "") + "a link that leads nowhere or round in a loop; "
-                        + "not read");
+                return Optional.of(NotRead.of(caseName, "a link that leads nowhere or round in a loop; not read"));
             }
         }
         if (Files.isDirectory(entry)) {
             if (realPath(entry).equals(realOut)) {
-                return Optional.of("the output folder of this run; not read");
+                return Optional.of(NotRead.of(false, "the output folder of this run; not read"));
             }
-            return Optional.of(caseName ? NOT_A_CASE + "a folder named like a case file; not read"
-                    : "a folder; triage reads only the files directly in DIR");
+            return Optional.of(NotRead.of(caseName, caseName ? "a folder named like a case file; not read"
+                    : "a folder; triage reads only the files directly in DIR"));
         }
         if (!Files.isRegularFile(entry)) {
-            return Optional.of((caseName ? NOT_A_CASE : "") + "not a regular file (a pipe, device or socket); "
-                    + "not opened");
+            return Optional.of(NotRead.of(caseName, "not a regular file (a pipe, device or socket); not opened"));
         }
         if (name.startsWith(".")) {
-            return Optional.of("a hidden file; not read");
+            return Optional.of(NotRead.of(false, "a hidden file; not read"));
         }
         if (!caseName) {
-            return Optional.of("not a case file (*.json or *.pdf); not read");
+            return Optional.of(NotRead.of(false, "not a case file (*.json or *.pdf); not read"));
         }
         return Optional.empty();
     }
