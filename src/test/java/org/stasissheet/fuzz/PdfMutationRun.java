@@ -7,12 +7,10 @@ import java.io.Writer;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.SplittableRandom;
 import org.stasissheet.cli.StasisCommand;
 
 /**
@@ -59,9 +57,5 @@ public final class PdfMutationRun {
                 + exits[2] + " sumOfPoolPeaksMiB=" + (peak >> 20));
         System.out.flush();
         System.exit(0);
-    }
-
-    static String ascii(byte[] b) {
-        return new String(b, StandardCharsets.ISO_8859_1);
     }
 }
