@@ -6,6 +6,8 @@ import java.nio.charset.StandardCharsets;
 import java.util.Map;
 import java.util.Set;
 import java.util.zip.DataFormatException;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.zip.Inflater;
 
 /**
@@ -57,7 +59,55 @@ final class PdfScan {
     }
 
     static void check(byte[] pdf) throws Refused {
+        checkAnywhere(pdf);
         new PdfScan().scan(pdf, 0, pdf.length, true);
+    }
+
+    /** "N G obj" wherever it stands: a reader rebuilding a broken cross-reference finds objects by this pattern. */
+    private static final Pattern OBJECT_HEADER = Pattern.compile("(\\d+)[ \\t\\r\\n\\f\\x00]+\\d+[ \\t\\r\\n\\f\\x00]*obj");
+    private static final Pattern XREF_SECTION = Pattern.compile("xref[ \\t\\r\\n]+(\\d+)[ \\t]+(\\d+)");
+    private static final Pattern BOUNDED_ENTRY = Pattern.compile("/(Size|N|Count|Columns|Colors|BitsPerComponent)"
+            + "[ \\t\\r\\n\\f\\x00]*(\\d+)");
+
+    /**
+     * The same bounds on the bytes as a plain text, ignoring structure: the tokenizer below follows the file as
+     * written, but a reader that finds the file broken searches it line by line, and may then meet what the
+     * tokenizer took for string or stream data.
+     */
+    private static void checkAnywhere(byte[] pdf) throws Refused {
+        String text = new String(pdf, StandardCharsets.ISO_8859_1);
+        Matcher m = OBJECT_HEADER.matcher(text);
+        while (m.find()) {
+            if (saturated(m.group(1)) > MAX_OBJECTS) {
+                throw new Refused("object number " + abbreviated(m.group(1)) + " is beyond " + MAX_OBJECTS);
+            }
+        }
+        m = XREF_SECTION.matcher(text);
+        while (m.find()) {
+            long start = saturated(m.group(1));
+            long count = saturated(m.group(2));
+            if (start + count > MAX_OBJECTS) {
+                throw new Refused("a cross-reference section of objects " + abbreviated(m.group(1)) + " to "
+                        + (start + count) + " goes beyond " + MAX_OBJECTS);
+            }
+        }
+        m = BOUNDED_ENTRY.matcher(text);
+        while (m.find()) {
+            long value = saturated(m.group(2));
+            long limit = BOUNDED_NUMBERS.get(m.group(1));
+            if (value > limit) {
+                throw new Refused("/" + m.group(1) + " " + abbreviated(m.group(2)) + " is larger than " + limit
+                        + ", the most accepted");
+            }
+        }
+    }
+
+    private static long saturated(String digits) {
+        return digits.length() > 15 ? Long.MAX_VALUE / 2 : Long.parseLong(digits);
+    }
+
+    private static String abbreviated(String digits) {
+        return digits.length() > 20 ? digits.substring(0, 20) + "…" : digits;
     }
 
     /**

@@ -72,6 +72,17 @@ class PdfReadBackBoundsTest {
     }
 
     @Test
+    @DisplayName("an object header hidden in string or stream data still counts: a reader rebuilding a broken file "
+            + "would find it (found by the PDF mutation run: 999999999 0 obj after a bomb spliced into a stream)")
+    void boundsHoldInsideData() {
+        byte[] inString = new TinyPdf().object("<</T(\n999999999 0 obj\n)>>").build();
+        assertTrue(refusal(inString).contains("object number 999999999"));
+        byte[] inStream = new TinyPdf().object("<<>>")
+                .stream("", "\nxref\n0 99999999\n".getBytes(StandardCharsets.ISO_8859_1)).build();
+        assertTrue(refusal(inStream).contains("cross-reference section"));
+    }
+
+    @Test
     @DisplayName("predictor parameters: /Columns 10000 passes, 10001 is refused")
     void predictor() {
         assertDoesNotThrow(() -> PdfScan.check(new TinyPdf().object("<</DecodeParms<</Columns 10000>>>>").build()));

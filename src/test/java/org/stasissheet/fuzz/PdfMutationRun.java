@@ -22,6 +22,11 @@ import org.stasissheet.cli.StasisCommand;
  * <p>Arguments: count, seed, a work folder, then the seed PDFs.
  */
 public final class PdfMutationRun {
+    /** {@code -Dstasis.fuzz.trace=true} prints each mutant before it is read. */
+    private static final boolean TRACE = Boolean.getBoolean("stasis.fuzz.trace");
+    /** {@code -Dstasis.fuzz.from=N} replays from mutant N on (the ones before are generated, not read). */
+    private static final int FROM = Integer.getInteger("stasis.fuzz.from", 0);
+
     private PdfMutationRun() {
     }
 
@@ -38,6 +43,14 @@ public final class PdfMutationRun {
         int[] exits = new int[3];
         for (int i = 0; i < count; i++) {
             PdfMutations.Mutant m = mutations.next();
+            if (i < FROM) {
+                continue;
+            }
+            if (TRACE) {
+                // which mutant is being read, before it is read: the last line names the one that broke the run
+                System.out.println("TRY " + i + " (" + m.what() + ")");
+                System.out.flush();
+            }
             Files.write(file, m.bytes());
             StringWriter err = new StringWriter();
             int code = StasisCommand.run(new String[] {"assess", file.toString()},
