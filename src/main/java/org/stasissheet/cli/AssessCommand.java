@@ -32,7 +32,7 @@ final class AssessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile), Inputs.ruleSet(rules.dir()));
+        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile, spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
         PrintWriter out = spec.commandLine().getOut();
         out.print(json ? WorksheetJson.render(sheet) : WorksheetText.render(sheet));
         out.flush();

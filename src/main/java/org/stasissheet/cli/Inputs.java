@@ -22,9 +22,6 @@ import org.stasissheet.rules.RuleSet;
  * into an {@link InvalidInputException} naming every problem.
  */
 public final class Inputs {
-    /** Largest worksheet PDF read back, in bytes (a worksheet is well under 1 MiB; 32 MiB leaves room). */
-    static final int MAX_PDF_BYTES = 32 << 20;
-
     private Inputs() {
     }
 
@@ -32,11 +29,12 @@ public final class Inputs {
      * A case with the JSON it was read from: the bytes go into the PDF as the record, so they are the case file
      * itself (or, for a worksheet PDF, the case file embedded in it), read once.
      */
-    record LoadedCase(byte[] json, Case value) {
+    record LoadedCase(byte[] json, Case value, List<String> warnings) {
         LoadedCase {
             Objects.requireNonNull(json, "json");
             Objects.requireNonNull(value, "value");
             json = json.clone();
+            warnings = List.copyOf(warnings);
         }
 
         @Override
@@ -45,31 +43,34 @@ public final class Inputs {
         }
     }
 
-    /** A case file (stasis-case/1 JSON) or a worksheet PDF (by its .pdf name or its %PDF start). */
-    static Case readCase(Path file) {
-        return loadCase(file).value();
+    /**
+     * A case file (stasis-case/1 JSON) or a worksheet PDF (by its .pdf name or its %PDF start); warnings about a
+     * read-back PDF go to {@code err} before anything else is printed.
+     */
+    static Case readCase(Path file, java.io.PrintWriter err) {
+        LoadedCase loaded = loadCase(file);
+        loaded.warnings().forEach(w -> err.println("warning: " + file + ": " + w));
+        err.flush();
+        return loaded.value();
     }
 
     static LoadedCase loadCase(Path file) {
-        byte[] json = caseBytes(file);
-        return new LoadedCase(json, parseCase(file, json));
-    }
-
-    /** The case JSON: the file's bytes, or the case embedded in a worksheet PDF. */
-    static byte[] caseBytes(Path file) {
-        byte[] bytes = readLimited(file, MAX_PDF_BYTES);
+        byte[] bytes = readLimited(file, WorksheetPdfs.MAX_PDF_BYTES);
         if (!WorksheetPdfs.looksLikePdf(file, bytes)) {
             if (bytes.length > CaseReader.MAX_BYTES) {
                 throw unreadable(file, "it is larger than " + CaseReader.MAX_BYTES + " bytes (1 MiB), the most a "
                         + "case file may be");
             }
-            return bytes;
+            return new LoadedCase(bytes, parseCase(file, bytes), List.of());
         }
+        WorksheetPdfs.ReadBack back;
         try {
-            return WorksheetPdfs.extractCase(bytes);
+            back = WorksheetPdfs.read(bytes);
         } catch (IOException e) {
             throw unreadable(file, e.getMessage());
         }
+        byte[] json = back.caseJson();
+        return new LoadedCase(json, parseCase(file, json), back.warnings());
     }
 
     /** The case in these bytes, or every problem with its path in the file. */
@@ -98,9 +99,13 @@ public final class Inputs {
         return ((LoadResult.Loaded) result).ruleSet();
     }
 
+    /** At most {@code limit} bytes of a regular file; anything else (a FIFO would block for ever) is not opened. */
     static byte[] readLimited(Path file, int limit) {
         if (Files.isDirectory(file)) {
             throw unreadable(file, "it is a folder, not a case file");
+        }
+        if (Files.exists(file) && !Files.isRegularFile(file)) {
+            throw unreadable(file, "it is not a regular file (a pipe, device or socket); it was not opened");
         }
         try (InputStream in = Files.newInputStream(file)) {
             byte[] bytes = in.readNBytes(limit + 1);

@@ -51,7 +51,7 @@ final class LabsCommand extends CommandGroup {
 
         @Override
         public Integer call() {
-            Case base = into == null ? Case.EMPTY : Inputs.readCase(into);
+            Case base = into == null ? Case.EMPTY : Inputs.readCase(into, spec.commandLine().getErr());
             LabImport read;
             try {
                 read = LabReports.read(Inputs.readLimited(report, LabReports.MAX_BYTES));

@@ -31,7 +31,7 @@ final class NoteCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile), Inputs.ruleSet(rules.dir()));
+        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile, spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
         PrintWriter out = spec.commandLine().getOut();
         out.print(HandoffNote.render(sheet, withIdentifiers));
         out.flush();

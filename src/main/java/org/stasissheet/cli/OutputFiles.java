@@ -16,4 +16,16 @@ final class OutputFiles {
             throw new InvalidInputException(e.getMessage());
         }
     }
+
+    /** True when both paths name one file (also through links or different spellings of the path). */
+    static boolean sameFile(Path a, Path b) {
+        try {
+            if (java.nio.file.Files.exists(a) && java.nio.file.Files.exists(b)) {
+                return java.nio.file.Files.isSameFile(a, b);
+            }
+        } catch (java.io.IOException e) {
+            // fall through to comparing the spelled paths
+        }
+        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
+    }
 }

@@ -36,13 +36,23 @@ final class PdfCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        refuseOverwritingInput();
         Inputs.LoadedCase loaded = Inputs.loadCase(caseFile);
+        loaded.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + caseFile + ": " + w));
         Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
         byte[] pdf = WorksheetPdf.render(sheet, layout.options(), OffsetDateTime.now(), loaded.json());
         OutputFiles.write(output, pdf);
         spec.commandLine().getOut().println("wrote " + output);
         spec.commandLine().getOut().flush();
         return ExitCode.DONE;
+    }
+
+    /** Writing over the case being read would destroy the only copy of it (and, without identifiers, its label). */
+    private void refuseOverwritingInput() {
+        if (OutputFiles.sameFile(caseFile, output)) {
+            throw new InvalidInputException(output + ": this is the input file; choose another output path (the"
+                    + " case file is never overwritten)");
+        }
     }
 
     /** Accepts {@code a4} or {@code letter}; anything else is a usage error (exit 2). */

@@ -29,14 +29,16 @@ public final class StasisCommand implements Runnable {
         return run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true));
     }
 
-    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+    public static int run(String[] args, PrintWriter rawOut, PrintWriter rawErr) {
+        PrintWriter out = Terminal.safe(rawOut);
+        PrintWriter err = Terminal.safe(rawErr);
         CommandLine cl = new CommandLine(new StasisCommand());
         ownWords(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> report(ex, err));
         cl.setParameterExceptionHandler((ex, args2) -> {
-            err.println(NAME + ": " + ex.getMessage());
+            err.println(Terminal.line(NAME + ": " + ex.getMessage()));
             err.println("For what '" + ex.getCommandLine().getCommandSpec().qualifiedName() + "' takes, run it with"
                     + " --help.");
             return ExitCode.INVALID_INPUT;
@@ -53,13 +55,15 @@ public final class StasisCommand implements Runnable {
 
     static int report(Throwable ex, PrintWriter err) {
         if (ex instanceof InvalidInputException invalid) {
-            invalid.lines().forEach(err::println);
+            Terminal.lines(invalid.lines()).forEach(err::println);
             err.flush();
             return ExitCode.INVALID_INPUT;
         }
         // An internal error: a short line, no stack trace, no patient data beyond the exception's own message.
-        err.println(NAME + ": internal error (" + ex.getClass().getSimpleName() + "): " + ex.getMessage());
-        err.println("Nothing was written. Please report this with the command you ran.");
+        err.println(Terminal.line(NAME + ": internal error (" + ex.getClass().getSimpleName() + "): "
+                + ex.getMessage()));
+        err.println("No file was left half-written (every output is written whole or not at all). Please report this"
+                + " with the command you ran.");
         err.flush();
         return ExitCode.INTERNAL_ERROR;
     }

@@ -39,7 +39,52 @@ public final class AtomicFiles {
     private static final Set<PosixFilePermission> OWNER_READ_WRITE = PosixFilePermissions.fromString("rw-------");
     private static final SecureRandom RANDOM = new SecureRandom();
 
+    /**
+     * A temporary file older than this is a leftover of a write that never finished (a killed process, a power
+     * cut): no whole-file write here takes more than seconds. Common practice, with a wide margin.
+     */
+    public static final java.time.Duration STALE_AFTER = java.time.Duration.ofMinutes(2);
+
+    /**
+     * The names {@link #createTemp} gives: a dot, the target's name (cut at 80), a dot, a random long as exactly 16
+     * hex digits, ".tmp"; a person's ".notes.1.tmp" never matches.
+     */
+    private static final java.util.regex.Pattern TEMP_NAME =
+            java.util.regex.Pattern.compile("\\..{1,80}\\.[0-9a-f]{16}\\.tmp");
+
     private AtomicFiles() {
+    }
+
+    /** True for a name this class gives its temporary files. */
+    public static boolean isTempName(String fileName) {
+        return TEMP_NAME.matcher(fileName).matches();
+    }
+
+    /**
+     * Deletes this class's own temporary files in {@code folder} that are older than {@link #STALE_AFTER}:
+     * they may hold patient data from a write that was killed half-way. Never follows links, never touches any
+     * other file; a file that cannot be deleted is left. Returns how many were deleted.
+     */
+    public static int removeStaleTemps(Path folder, java.time.Instant now) {
+        int removed = 0;
+        try (java.nio.file.DirectoryStream<Path> entries = Files.newDirectoryStream(folder,
+                p -> isTempName(p.getFileName().toString()))) {
+            for (Path p : entries) {
+                try {
+                    java.nio.file.attribute.BasicFileAttributes a = Files.readAttributes(p,
+                            java.nio.file.attribute.BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+                    if (a.isRegularFile() && a.lastModifiedTime().toInstant().isBefore(now.minus(STALE_AFTER))) {
+                        Files.delete(p);
+                        removed++;
+                    }
+                } catch (IOException e) {
+                    // left for the next start; a leftover is no worse than before
+                }
+            }
+        } catch (IOException e) {
+            // an unlistable folder: nothing to clean that this process could reach
+        }
+        return removed;
     }
 
     public static void write(Path target, byte[] data) throws FileWriteException {
@@ -111,7 +156,7 @@ public final class AtomicFiles {
         for (int attempt = 0; ; attempt++) {
             // keep the temporary name within the usual 255-byte limit even for a long target name
             String stem = name.length() > 80 ? name.substring(0, 80) : name;
-            Path temp = folder.resolve("." + stem + "." + Long.toHexString(RANDOM.nextLong()) + ".tmp");
+            Path temp = folder.resolve("." + stem + "." + java.util.HexFormat.of().toHexDigits(RANDOM.nextLong()) + ".tmp");
             try {
                 Path created = Files.createFile(temp, attributes);
                 if (permissions != null) {

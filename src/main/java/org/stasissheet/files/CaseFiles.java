@@ -25,6 +25,10 @@ public final class CaseFiles {
         if (Files.isDirectory(file)) {
             return rejected("cannot read " + name + ": it is a folder, not a case file");
         }
+        if (Files.exists(file) && !Files.isRegularFile(file)) {
+            // a FIFO would block the reader for ever; a device never ends
+            return rejected("cannot read " + name + ": it is not a regular file (a pipe, device or socket)");
+        }
         byte[] bytes;
         try {
             long size = Files.size(file);

@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -35,14 +36,17 @@ public final class RuleSources {
 
     /** A rule folder, validated and compared with the shipped set. An unreadable folder is a refusal too. */
     public static LoadResult folder(Path dir) {
-        Map<String, byte[]> files;
+        FolderFiles read;
         try {
-            files = readFolder(dir);
+            read = readFolder(dir);
         } catch (IOException | UncheckedIOException e) {
             return new LoadResult.Refused(List.of(new RuleProblem(dir.toString(), 0, 0,
                     "cannot read the rule folder: " + e.getMessage())));
         }
-        return RuleSetLoader.load(files, Optional.of(shippedSha256()));
+        if (!read.problems().isEmpty()) {
+            return new LoadResult.Refused(read.problems());
+        }
+        return RuleSetLoader.load(read.files(), Optional.of(shippedSha256()));
     }
 
     /** The SHA-256 of the shipped set, computed from the copy on the class path. */
@@ -50,22 +54,76 @@ public final class RuleSources {
         return RuleSetLoader.sha256(shippedFiles());
     }
 
-    /** Every {@code .yaml}/{@code .yml} file under {@code dir}, by relative path with '/' separators. */
-    public static Map<String, byte[]> readFolder(Path dir) throws IOException {
+    /** What a folder held: the files read, and the entries refused without being read. */
+    public record FolderFiles(Map<String, byte[]> files, List<RuleProblem> problems) {
+    }
+
+    /**
+     * Every {@code .yaml}/{@code .yml} file under {@code dir}, by relative path with '/' separators. A file that
+     * is not a regular file (a FIFO would block forever) or a link leading outside the folder is refused before
+     * it is opened; each file is read through a stream that stops one byte past {@link RuleSetLoader#MAX_FILE_BYTES},
+     * and no more than {@link RuleSetLoader#MAX_FILES} files are read.
+     */
+    public static FolderFiles readFolder(Path dir) throws IOException {
         if (!Files.isDirectory(dir)) {
             throw new IOException(dir + " is not a folder");
         }
+        Path root = dir.toRealPath();
         Map<String, byte[]> files = new TreeMap<>();
+        List<RuleProblem> problems = new ArrayList<>();
+        List<Path> entries;
         try (Stream<Path> walk = Files.walk(dir)) {
-            for (Path p : walk.filter(Files::isRegularFile).toList()) {
-                String name = p.getFileName().toString();
-                if (name.endsWith(".yaml") || name.endsWith(".yml")) {
-                    String rel = dir.relativize(p).toString().replace('\\', '/');
-                    files.put(rel, Files.readAllBytes(p));
+            entries = walk.filter(p -> isYaml(p.getFileName().toString())).sorted().toList();
+        }
+        for (Path p : entries) {
+            String rel = dir.relativize(p).toString().replace('\\', '/');
+            Optional<String> refusal = refusal(root, p);
+            if (refusal.isPresent()) {
+                problems.add(new RuleProblem(rel, 0, 0, refusal.get() + "; it was not read"));
+                continue;
+            }
+            if (files.size() >= RuleSetLoader.MAX_FILES) {
+                problems.add(new RuleProblem(rel, 0, 0, "more than " + RuleSetLoader.MAX_FILES
+                        + " YAML files in the rule folder; the rest were not read"));
+                break;
+            }
+            try (InputStream in = Files.newInputStream(p)) {
+                byte[] bytes = in.readNBytes(RuleSetLoader.MAX_FILE_BYTES + 1);
+                if (bytes.length > RuleSetLoader.MAX_FILE_BYTES) {
+                    problems.add(new RuleProblem(rel, 0, 0, "larger than " + RuleSetLoader.MAX_FILE_BYTES
+                            + " bytes (1 MiB), the most a rule file may be; it was not read further"));
+                } else {
+                    files.put(rel, bytes);
                 }
             }
         }
-        return files;
+        return new FolderFiles(files, problems);
+    }
+
+    private static boolean isYaml(String name) {
+        return name.endsWith(".yaml") || name.endsWith(".yml");
+    }
+
+    /** Why an entry must not be opened, checked on the entry itself and, for a link, on where it leads. */
+    private static Optional<String> refusal(Path root, Path p) throws IOException {
+        if (Files.isSymbolicLink(p)) {
+            Path target;
+            try {
+                target = p.toRealPath();
+            } catch (IOException e) {
+                return Optional.of("a link that leads nowhere (or round in a loop)");
+            }
+            if (!target.startsWith(root)) {
+                return Optional.of("a link leading outside the rule folder");
+            }
+        }
+        if (Files.isDirectory(p)) {
+            return Optional.of("a folder with a rule-file name");
+        }
+        if (!Files.isRegularFile(p)) {
+            return Optional.of("not a regular file (a pipe, device or socket)");
+        }
+        return Optional.empty();
     }
 
     /** The shipped files: the manifest and every file it lists (lines under {@code files:} starting "- "). */
@@ -82,7 +140,7 @@ public final class RuleSources {
 
     /** The paths under the manifest's top-level {@code files:} key; the loader re-checks them properly. */
     static List<String> listedIn(String manifest) {
-        List<String> out = new java.util.ArrayList<>();
+        List<String> out = new ArrayList<>();
         boolean inFiles = false;
         for (String line : manifest.split("\n", -1)) {
             String trimmed = line.strip();

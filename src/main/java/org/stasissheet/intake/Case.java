@@ -30,4 +30,13 @@ public record Case(Patient patient, Condition condition, Labs labs, Labs baselin
         Objects.requireNonNull(assessor, "assessor");
         Objects.requireNonNull(extraJson, "extraJson");
     }
+
+    /**
+     * This case without what identifies a person: the patient label, the assessor and {@code extra} (where a
+     * hospital number would live). For teaching and audit copies; everything clinical stays.
+     */
+    public Case withoutIdentifiers() {
+        Patient p = new Patient("", patient.sex(), patient.ageYears(), patient.height(), patient.weight());
+        return new Case(p, condition, labs, baseline, findings, plan, assessedAt, "", "{}");
+    }
 }

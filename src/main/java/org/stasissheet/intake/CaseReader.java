@@ -23,6 +23,18 @@ public final class CaseReader {
     public static final int MAX_DEPTH = 64;
     /** Longest JSON string (or key) accepted, in characters. */
     public static final int MAX_STRING_CHARS = 10_000;
+    /** Longest number accepted, in characters as written; real values need a dozen. */
+    public static final int MAX_NUMBER_CHARS = 40;
+    /**
+     * Largest decimal exponent of a non-zero number written with a fraction or exponent, either way: 1e-15 to
+     * 1e15 in magnitude (an integer is bounded by {@link #MAX_NUMBER_CHARS}). Refused before any conversion, so
+     * {@code 1e999999999} costs nothing and {@code 1e-999999999} is never read as zero.
+     */
+    public static final int MAX_NUMBER_EXPONENT = 15;
+    /** Most problems listed for one file; the rest are counted in a last line ("… and N more"). */
+    public static final int MAX_PROBLEMS = 100;
+    /** Longest problem message, in characters; a longer one is cut with "…". */
+    public static final int MAX_MESSAGE_CHARS = 500;
 
     private CaseReader() {
     }

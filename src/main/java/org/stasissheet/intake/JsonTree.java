@@ -53,6 +53,8 @@ final class JsonTree {
             .build();
 
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+    /** Stands for a number already reported as refused; later steps skip it as they skip NaN. */
+    private static final JsonNode REFUSED_NUMBER = DoubleNode.valueOf(Double.NaN);
 
     private final JsonParser parser;
     private final Problems problems;
@@ -171,14 +173,8 @@ final class JsonTree {
             case VALUE_STRING:
                 return TextNode.valueOf(parser.getText());
             case VALUE_NUMBER_INT:
-                return DecimalNode.valueOf(new BigDecimal(parser.getBigIntegerValue()));
             case VALUE_NUMBER_FLOAT:
-                if (parser.isNaN()) {
-                    problems.add(path, parser.getText() + " is not a number JSON allows (no NaN or Infinity);"
-                            + " enter a finite number, or leave the key out if there is no value");
-                    return DoubleNode.valueOf(Double.NaN);
-                }
-                return DecimalNode.valueOf(parser.getDecimalValue());
+                return number(path);
             case VALUE_TRUE:
                 return BooleanNode.TRUE;
             case VALUE_FALSE:
@@ -188,6 +184,37 @@ final class JsonTree {
             default:
                 throw new IllegalStateException("unexpected token " + token);
         }
+    }
+
+    /**
+     * A number within the bounds of {@link CaseReader#MAX_NUMBER_CHARS} and {@link CaseReader#MAX_NUMBER_EXPONENT},
+     * checked on the text as written before any conversion; a refused number becomes null after its problem is
+     * recorded, so no later step ever expands it.
+     */
+    private JsonNode number(String path) throws IOException {
+        String written = parser.getText();
+        if (parser.currentToken() == JsonToken.VALUE_NUMBER_FLOAT && parser.isNaN()) {
+            problems.add(path, written + " is not a number JSON allows (no NaN or Infinity);"
+                    + " enter a finite number, or leave the key out if there is no value");
+            return DoubleNode.valueOf(Double.NaN);
+        }
+        if (written.length() > CaseReader.MAX_NUMBER_CHARS) {
+            problems.add(path, "a number written with " + written.length() + " characters ("
+                    + written.substring(0, 12) + "…); at most " + CaseReader.MAX_NUMBER_CHARS + " are accepted");
+            return REFUSED_NUMBER;
+        }
+        BigDecimal value = parser.getDecimalValue();
+        // an integer's size is already bounded by its digits; an exponent is what lets 12 characters mean 1e999999999
+        if (parser.currentToken() == JsonToken.VALUE_NUMBER_FLOAT && value.signum() != 0) {
+            long exponent = (long) value.precision() - value.scale() - 1;
+            if (Math.abs(exponent) > CaseReader.MAX_NUMBER_EXPONENT) {
+                problems.add(path, written + " is " + (exponent > 0 ? "too large" : "too small")
+                        + " for a case file: non-zero numbers must lie between 1e-" + CaseReader.MAX_NUMBER_EXPONENT
+                        + " and 1e" + CaseReader.MAX_NUMBER_EXPONENT + " in size; check the value and its unit");
+                return REFUSED_NUMBER;
+            }
+        }
+        return DecimalNode.valueOf(value);
     }
 
     private static String where(String parentPath) {

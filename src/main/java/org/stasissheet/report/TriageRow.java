@@ -9,7 +9,8 @@ import org.stasissheet.rules.Level;
 import org.stasissheet.worksheet.Worksheet;
 
 /**
- * One referral in a triage summary: a case that was assessed, or a file that could not be.
+ * One entry of a referral folder in a triage summary: a case that was assessed, a file that could not be, or an
+ * entry that was deliberately not read (with the reason).
  *
  * @param file               the referral's file name inside the folder
  * @param patient            the patient label, empty when none or when identifiers are left out
@@ -25,7 +26,9 @@ public record TriageRow(String file, String patient, Status status, Optional<Lev
 
     /** How far the batch got with this file. */
     public enum Status {
-        OK("ok"), ERROR("error"), INTERNAL_ERROR("internal-error");
+        OK("ok"), ERROR("error"), INTERNAL_ERROR("internal-error"),
+        /** Not a referral to read (a folder, a hidden or other file, a duplicate of another referral). */
+        SKIPPED("skipped");
 
         private final String code;
 
@@ -70,7 +73,19 @@ public record TriageRow(String file, String patient, Status status, Optional<Lev
                 VerdictWords.hyperviscosityRank(sheet.hyperviscosity()), pdf, "");
     }
 
-    /** A file the batch could not assess: it keeps its place in the summary with the reason. */
+    /** The same row with a note added to its message (a read-back warning, an unwritten PDF). */
+    public TriageRow noting(String note) {
+        return new TriageRow(file, patient, status, highestLevel, hyperviscosity, leukostasis, tumorLysis, topFlag,
+                leukostasisScore, hyperviscosityRank, pdf, message.isEmpty() ? note : message + "; " + note);
+    }
+
+    /** The same assessed row, but its PDF could not be written: the verdicts stay, the reason is noted. */
+    public TriageRow withoutPdf(String why) {
+        return new TriageRow(file, patient, status, highestLevel, hyperviscosity, leukostasis, tumorLysis, topFlag,
+                leukostasisScore, hyperviscosityRank, "", message).noting("the worksheet PDF was not written: " + why);
+    }
+
+    /** A file the batch could not assess, or an entry it did not read: it keeps its place with the reason. */
     public static TriageRow failed(String file, Status status, String message) {
         if (status == Status.OK) {
             throw new IllegalArgumentException("a failed row cannot be ok");

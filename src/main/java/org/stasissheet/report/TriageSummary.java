@@ -17,7 +17,8 @@ public final class TriageSummary {
     /**
      * Most urgent first: by highest level (act now first); a file that could not be assessed comes right after
      * the act-now rows, because an unread referral may hide an emergency and needs a person; then by leukostasis
-     * score (higher first), then hyperviscosity (likely first), then by file name so the order is stable.
+     * score (higher first), then hyperviscosity (likely first), then by file name so the order is stable. Entries
+     * deliberately not read (folders, other files, duplicates) come last, each with its reason.
      */
     public static final Comparator<TriageRow> MOST_URGENT_FIRST = Comparator
             .comparingInt(TriageSummary::levelRank)
@@ -29,6 +30,9 @@ public final class TriageSummary {
     }
 
     static int levelRank(TriageRow r) {
+        if (r.status() == TriageRow.Status.SKIPPED) {
+            return 5;
+        }
         if (r.status() != TriageRow.Status.OK) {
             return 1;
         }

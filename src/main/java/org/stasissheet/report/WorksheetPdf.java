@@ -1,9 +1,5 @@
 package org.stasissheet.report;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
@@ -22,12 +18,14 @@ import com.lowagie.text.pdf.PdfName;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfPageEventHelper;
+import com.lowagie.text.pdf.PdfString;
 import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
 import java.awt.Color;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.time.OffsetDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.GregorianCalendar;
@@ -35,6 +33,8 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import org.stasissheet.intake.Case;
+import org.stasissheet.files.WorksheetPdfs;
+import org.stasissheet.intake.CaseWriter;
 import org.stasissheet.intake.Enums;
 import org.stasissheet.intake.Findings;
 import org.stasissheet.intake.Observation;
@@ -56,9 +56,10 @@ public final class WorksheetPdf {
     public static final String TITLE = "Stasis Sheet worksheet";
     /** The name of the embedded case file, which {@code files.WorksheetPdfs} looks for when reading a PDF back. */
     public static final String ATTACHMENT_NAME = "stasis-case.json";
+    /** The document-information key holding the embedded case's SHA-256, which read-back checks. */
+    public static final String CASE_DIGEST_KEY = WorksheetPdfs.CASE_DIGEST_KEY;
 
     static final DateTimeFormatter TIME = ReportTime.FORMAT;
-    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private static final float MARGIN = 40;
     private static final float CAUTION_SIZE = 7.5f;
     private static final float CAUTION_LEADING = 8.6f;
@@ -69,7 +70,8 @@ public final class WorksheetPdf {
     private final Worksheet sheet;
     private final PdfOptions options;
     private final OffsetDateTime generatedAt;
-    private final byte[] caseJson;
+    private final byte[] embedded;
+    private final String embeddedSha256;
     private final SourceList sources = new SourceList();
     private final Font body = font(PdfFonts.regular(), 9);
     private final Font bodyBold = font(PdfFonts.bold(), 9);
@@ -82,14 +84,16 @@ public final class WorksheetPdf {
         this.sheet = Objects.requireNonNull(sheet, "sheet");
         this.options = Objects.requireNonNull(options, "options");
         this.generatedAt = Objects.requireNonNull(generatedAt, "generatedAt");
-        this.caseJson = Objects.requireNonNull(caseJson, "caseJson").clone();
+        this.embedded = embeddedCase(sheet.source(), Objects.requireNonNull(caseJson, "caseJson"),
+                options.includeIdentifiers());
+        this.embeddedSha256 = WorksheetPdfs.sha256(embedded);
     }
 
     /**
      * The PDF bytes.
      *
-     * @param caseJson the case file exactly as read (stasis-case/1 JSON); without identifiers its patient label
-     *                 is removed before it is embedded
+     * @param caseJson the case file exactly as read (stasis-case/1 JSON); without identifiers the case is
+     *                 embedded without label, assessor and {@code extra} instead
      */
     public static byte[] render(Worksheet sheet, PdfOptions options, OffsetDateTime generatedAt, byte[] caseJson) {
         return new WorksheetPdf(sheet, options, generatedAt, caseJson).render();
@@ -241,7 +245,7 @@ public final class WorksheetPdf {
         pair(t, "Patient", options.includeIdentifiers() ? orDash(p.label()) : "(left out of this copy)");
         pair(t, "Sex / age", p.sex().map(Enums.Coded::code).orElse("not given") + " / "
                 + p.ageYears().map(a -> a + " years").orElse("age not given"));
-        pair(t, "Assessor", orDash(c.assessor()));
+        pair(t, "Assessor", options.includeIdentifiers() ? orDash(c.assessor()) : "(left out of this copy)");
         pair(t, "Assessed at", c.assessedAt().map(TIME::format).orElse("not given"));
         pair(t, "Generated at", TIME.format(generatedAt));
         pair(t, "Rule set", sheet.ruleSet().name() + " " + sheet.ruleSet().version()
@@ -344,8 +348,10 @@ public final class WorksheetPdf {
         t.addCell(hashLabel);
         t.addCell(hash);
         row(t, "Embedded record", "the case file is attached to this PDF as " + ATTACHMENT_NAME
-                + (options.includeIdentifiers() ? "" : " (patient label removed)")
-                + "; assessing this PDF reads it back.");
+                + (options.includeIdentifiers() ? "" : " (patient label, assessor and extra removed)")
+                + "; assessing this PDF reads it back and checks it against the SHA-256 below.");
+        t.addCell(cell("Embedded case SHA-256", bodyBold));
+        t.addCell(cell(embeddedSha256, font(PdfFonts.regular(), 8)));
         doc.add(t);
         if (p.local()) {
             Paragraph local = text("LOCAL PROTOCOL: this rule set differs from the one shipped with the tool. "
@@ -355,28 +361,28 @@ public final class WorksheetPdf {
         }
     }
 
+    /**
+     * Embeds the case and records its SHA-256 in the document information as {@value #CASE_DIGEST_KEY}, apart
+     * from the attachment: an edit of the embedded case alone no longer matches, and read-back refuses it.
+     */
     private void attachCase(PdfWriter writer) {
         try {
-            byte[] bytes = options.includeIdentifiers() ? caseJson : withoutLabel(caseJson);
-            PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, ATTACHMENT_NAME, bytes,
+            PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, ATTACHMENT_NAME, embedded,
                     true, "application/json", null);
             writer.addFileAttachment("The case file this worksheet was made from (stasis-case/1)", spec);
+            writer.getInfo().put(new PdfName(CASE_DIGEST_KEY), new PdfString(embeddedSha256));
         } catch (IOException e) {
             throw new UncheckedIOException("the case file could not be attached", e);
         }
     }
 
-    /** The case JSON without {@code patient.label}: for teaching and audit copies. */
-    static byte[] withoutLabel(byte[] caseJson) {
-        try {
-            JsonNode root = JSON.readTree(caseJson);
-            if (root != null && root.get("patient") instanceof ObjectNode patient) {
-                patient.remove("label");
-            }
-            return JSON.writeValueAsBytes(root);
-        } catch (IOException e) {
-            throw new IllegalArgumentException("the case file to embed is not JSON: " + e.getMessage(), e);
-        }
+    /**
+     * The case file to embed: as read, or, for a copy without identifiers, rewritten from the case without the
+     * label, the assessor and {@code extra} (by the case writer, so it always reads back).
+     */
+    static byte[] embeddedCase(Case c, byte[] caseJson, boolean includeIdentifiers) {
+        return includeIdentifiers ? caseJson.clone()
+                : CaseWriter.write(c.withoutIdentifiers()).getBytes(StandardCharsets.UTF_8);
     }
 
     private static String orDash(String s) {

@@ -34,6 +34,16 @@ import org.stasissheet.rules.YamlTree.Where;
 public final class RuleSetLoader {
     public static final String MANIFEST = "manifest.yaml";
     public static final String FORMAT = "stasis-rules/1";
+    /** Most rules in one set; the shipped set has under a hundred. Beyond it the set is refused. */
+    public static final int MAX_RULES = 2_000;
+    /** Most parameters in one set; the shipped set has under a hundred. Beyond it the set is refused. */
+    public static final int MAX_PARAMETERS = 2_000;
+    /** Most files in one rule folder, the manifest included. */
+    public static final int MAX_FILES = 50;
+    /** Most problems listed for one set; the rest are counted in a last line ("... and N more"). */
+    public static final int MAX_PROBLEMS = 100;
+    /** Largest rule file, in bytes (1 MiB); the folder reader stops reading one byte past it. */
+    public static final int MAX_FILE_BYTES = YamlTree.MAX_BYTES;
 
     private static final Set<String> MANIFEST_KEYS = Set.of("format", "name", "version", "description", "files");
     private static final Set<String> FILE_KEYS = Set.of("parameters", "rules");
@@ -93,6 +103,7 @@ public final class RuleSetLoader {
         private final Map<String, String> firstSeen = new HashMap<>();
         private final Set<String> declaredParameters = new java.util.HashSet<>();
         private int invalidReferences;
+        private int unlisted;
         private final List<Rule> rules = new ArrayList<>();
         private final List<PendingRule> pending = new ArrayList<>();
         private String file = MANIFEST;
@@ -105,14 +116,19 @@ public final class RuleSetLoader {
         }
 
         LoadResult load(Optional<String> shippedSha256) {
+            if (files.size() > MAX_FILES) {
+                problem(0, 0, "the rule folder holds " + files.size() + " YAML files; a rule set may have at most "
+                        + MAX_FILES);
+                return refused();
+            }
             byte[] manifestBytes = files.get(MANIFEST);
             if (manifestBytes == null) {
                 problem(0, 0, "the rule set has no " + MANIFEST);
-                return new LoadResult.Refused(problems);
+                return refused();
             }
             Optional<Mapping> manifest = parse(MANIFEST, manifestBytes);
             if (manifest.isEmpty()) {
-                return new LoadResult.Refused(problems);
+                return refused();
             }
             Mapping m = manifest.get();
             file = MANIFEST;
@@ -139,9 +155,15 @@ public final class RuleSetLoader {
             }
             if (parsed.size() < listed.size()) {
                 // a file that cannot be parsed hides its parameters: checking the rest would only echo that
-                return new LoadResult.Refused(problems);
+                return refused();
             }
             parsed.forEach(this::readRuleFile);
+            if (pending.size() > MAX_RULES || declaredParameters.size() > MAX_PARAMETERS) {
+                file = MANIFEST;
+                problem(0, 0, "the set has " + pending.size() + " rules and " + declaredParameters.size()
+                        + " parameters; at most " + MAX_RULES + " rules and " + MAX_PARAMETERS + " parameters are read");
+                return refused();
+            }
             file = MANIFEST;
             checkRequired(m);
             for (PendingRule p : pending) {
@@ -149,7 +171,7 @@ public final class RuleSetLoader {
                 readRule(p.node());
             }
             if (!problems.isEmpty()) {
-                return new LoadResult.Refused(problems);
+                return refused();
             }
             String sha = sha256(files);
             boolean local = shippedSha256.map(s -> !s.equalsIgnoreCase(sha)).orElse(true);
@@ -319,6 +341,39 @@ public final class RuleSetLoader {
                     }
                 }
                 req.analyte().ifPresent(a -> checkEquivalents(p, a, where));
+                if (allFigures(p).stream().allMatch(q -> req.accepts(q.unit()))) {
+                    checkAllowed(req, p, where);
+                }
+            }
+            checkOrder();
+        }
+
+        /** A value the estimates cannot use (a hematocrit of 0 or 1, a zero volume) is refused here, not at use. */
+        private void checkAllowed(RequiredParameters.Required req, Parameter p, Where where) {
+            double v = req.valueIn(p);
+            if (!req.allowed().contains(v)) {
+                problem(where, "parameter \"" + req.id() + "\" is " + p.value() + "; it must be "
+                        + req.allowed().describe());
+            }
+        }
+
+        private void checkOrder() {
+            Map<String, RequiredParameters.Required> byId = new HashMap<>();
+            RequiredParameters.ALL.forEach(r -> byId.put(r.id(), r));
+            for (RequiredParameters.Ordered o : RequiredParameters.ORDERED) {
+                Parameter lower = parameters.get(o.lower());
+                Parameter upper = parameters.get(o.upper());
+                RequiredParameters.Required lowerReq = byId.get(o.lower());
+                RequiredParameters.Required upperReq = byId.get(o.upper());
+                if (lower == null || upper == null || !lowerReq.accepts(lower.value().unit())
+                        || !upperReq.accepts(upper.value().unit())) {
+                    continue;
+                }
+                if (lowerReq.valueIn(lower) > upperReq.valueIn(upper)) {
+                    file = parameterFile.get(o.lower());
+                    problem(parameterWhere.get(o.lower()), "parameter \"" + o.lower() + "\" (" + lower.value()
+                            + ") must not be larger than \"" + o.upper() + "\" (" + upper.value() + ")");
+                }
             }
         }
 
@@ -344,9 +399,9 @@ public final class RuleSetLoader {
         }
 
         private void readRule(Mapping m) {
-            int before = problems.size();
+            int before = problems.size() + unlisted;
             int referencesBefore = invalidReferences;
-            if (!buildRule(m) && problems.size() == before && invalidReferences == referencesBefore) {
+            if (!buildRule(m) && problems.size() + unlisted == before && invalidReferences == referencesBefore) {
                 // never drop a rule silently: a set without it would be a partial set
                 problem(m.where(), "this rule could not be read");
             }
@@ -628,7 +683,19 @@ public final class RuleSetLoader {
         }
 
         private void problem(int line, int column, String message) {
-            problems.add(new RuleProblem(file, line, column, abbreviated(message)));
+            if (problems.size() < MAX_PROBLEMS) {
+                problems.add(new RuleProblem(file, line, column, abbreviated(message)));
+            } else {
+                unlisted++;
+            }
+        }
+
+        private LoadResult refused() {
+            List<RuleProblem> all = new ArrayList<>(problems);
+            if (unlisted > 0) {
+                all.add(new RuleProblem("(rule set)", 0, 0, "… and " + unlisted + " more problems not listed"));
+            }
+            return new LoadResult.Refused(all);
         }
     }
 

@@ -60,11 +60,13 @@ final class YamlTree {
     }
 
     /** Largest rule file read, in bytes: 1 MiB. The shipped files are a few kilobytes each. */
-    static final int MAX_BYTES = 1 << 20;
+    public static final int MAX_BYTES = 1 << 20;
     /** Deepest nesting of mappings and lists accepted; the schema needs five levels. */
     static final int MAX_DEPTH = 32;
     /** Longest key or value accepted, in characters; the longest shipped explanation is under a thousand. */
     static final int MAX_SCALAR_CHARS = 10_000;
+    /** Most keys, values and lists in one file; the shipped files have a few hundred each. */
+    static final int MAX_NODES = 50_000;
 
     private static final YAMLFactory FACTORY = new YAMLFactory();
 
@@ -81,7 +83,13 @@ final class YamlTree {
             if (t == null) {
                 return new Mapping(Map.of(), Map.of(), new Where(1, 1));
             }
-            return read(p, t, 1);
+            Node root = read(p, t, 1, new int[1]);
+            if (p.nextToken() != null) {
+                // a second document would be silently ignored by a one-document reader: refuse it instead
+                throw new Malformed("a second YAML document starts here (after ---); a rule file holds exactly one",
+                        where(p.currentTokenLocation()));
+            }
+            return root;
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
             Where where = at == null ? new Where(1, 1) : new Where(Math.max(1, at.getLineNr()),
@@ -114,8 +122,12 @@ final class YamlTree {
         }
     }
 
-    private static Node read(JsonParser p, JsonToken t, int depth) throws IOException, Malformed {
+    private static Node read(JsonParser p, JsonToken t, int depth, int[] count) throws IOException, Malformed {
         Where where = where(p.currentTokenLocation());
+        if (++count[0] > MAX_NODES) {
+            throw new Malformed("more than " + MAX_NODES + " keys, values and lists in one file; a rule file needs "
+                    + "far fewer", where);
+        }
         if ((t == JsonToken.START_OBJECT || t == JsonToken.START_ARRAY) && depth > MAX_DEPTH) {
             throw new Malformed("nested more than " + MAX_DEPTH + " levels deep; a rule file needs far fewer", where);
         }
@@ -131,7 +143,7 @@ final class YamlTree {
                         throw new Malformed("duplicate key \"" + name + "\" (first at line "
                                 + keys.get(name).line() + ")", keyWhere);
                     }
-                    Node value = read(p, p.nextToken(), depth + 1);
+                    Node value = read(p, p.nextToken(), depth + 1, count);
                     entries.put(name, value);
                     keys.put(name, keyWhere);
                 }
@@ -140,7 +152,7 @@ final class YamlTree {
             case START_ARRAY -> {
                 List<Node> items = new ArrayList<>();
                 for (JsonToken i = p.nextToken(); i != JsonToken.END_ARRAY; i = p.nextToken()) {
-                    items.add(read(p, i, depth + 1));
+                    items.add(read(p, i, depth + 1, count));
                 }
                 return new Sequence(items, where);
             }

@@ -47,7 +47,7 @@ class TriageCommandTest {
     }
 
     /** The CSV's rows split into cells (RFC 4180, enough for these cells: quotes only around whole cells). */
-    private static List<List<String>> parse(String csv) {
+    static List<List<String>> parse(String csv) {
         List<List<String>> rows = new ArrayList<>();
         for (String line : csv.split("\r\n")) {
             List<String> cells = new ArrayList<>();
@@ -80,8 +80,11 @@ class TriageCommandTest {
         List<List<String>> rows = parse(Files.readString(outDir.resolve("summary.csv"), StandardCharsets.UTF_8));
         assertEquals(List.of("file", "patient", "status", "highest_level", "hyperviscosity", "leukostasis",
                 "tumor_lysis", "top_flag", "pdf", "message"), rows.get(0));
-        assertEquals(7, rows.size(), "header + 6 case files (notes.txt is not a case)");
+        assertEquals(8, rows.size(), "header + 6 case files + notes.txt: every entry of the folder gets a row");
         List<List<String>> data = rows.subList(1, rows.size());
+        List<String> notes = row(data, "notes.txt");
+        assertEquals("skipped", notes.get(2));
+        assertTrue(notes.get(9).contains("not a case file"), notes.get(9));
         List<String> broken = row(data, "broken.json");
         assertEquals("error", broken.get(2));
         assertFalse(broken.get(9).isBlank(), "the message says what is wrong");
@@ -98,7 +101,7 @@ class TriageCommandTest {
             assertTrue(r.get(1).startsWith("Demo patient"), "the label is in the summary: " + r);
         }
         assertFalse(Files.exists(outDir.resolve("broken.pdf")), "no PDF for a bad file");
-        assertTrue(err.toString().contains("[1/6] aml-breathless.json ok"), err.toString());
+        assertTrue(err.toString().contains("[1/7] aml-breathless.json ok"), err.toString());
         assertTrue(err.toString().contains("broken.json error"), err.toString());
     }
 

@@ -35,7 +35,7 @@ class WorksheetPdfsTest {
     void brokenPdf_isRefused() {
         byte[] junk = "%PDF-1.7 this is not really a PDF".getBytes(StandardCharsets.US_ASCII);
         IOException e = assertThrows(IOException.class, () -> WorksheetPdfs.extractCase(junk));
-        assertTrue(e.getMessage().startsWith("not a readable PDF"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("not a readable worksheet PDF"), e.getMessage());
     }
 
     @Test

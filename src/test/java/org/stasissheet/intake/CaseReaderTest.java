@@ -430,11 +430,11 @@ class CaseReaderTest {
         }
 
         @Test
-        @DisplayName("a number too large for a double is refused, not turned into Infinity")
+        @DisplayName("a number too large for a double is refused as written, not turned into Infinity")
         void hugeNumber() {
             Problem p = only(VALID.replace("\"value\": 7.2,", "\"value\": 1e400,"));
             assertEquals("labs.wbc.value", p.path());
-            assertContains(p.message(), "1E+400", "too large");
+            assertContains(p.message(), "1e400", "too large");
         }
 
         @Test

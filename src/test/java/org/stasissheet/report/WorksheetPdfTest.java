@@ -3,6 +3,7 @@ package org.stasissheet.report;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -158,7 +159,8 @@ class WorksheetPdfTest {
     }
 
     @Test
-    @DisplayName("--no-identifiers leaves the label out of every page and out of the embedded case")
+    @DisplayName("--no-identifiers leaves the label, the assessor and extra out of every page and the embedded case,"
+            + " which still reads back")
     void noIdentifiers_removesTheLabelEverywhere() throws IOException {
         byte[] bytes = render(Fixtures.CYRILLIC_LABEL, new PdfOptions(Paper.A4, false, "t"));
         try (PdfProbe pdf = new PdfProbe(bytes)) {
@@ -168,7 +170,12 @@ class WorksheetPdfTest {
             String embedded = new String(pdf.attachments().get(WorksheetPdf.ATTACHMENT_NAME), StandardCharsets.UTF_8);
             assertFalse(embedded.contains("Анна"), embedded);
             assertTrue(embedded.contains("\"ageYears\""), "the rest of the case stays: " + embedded);
-            assertTrue(embedded.contains("St. Alder Infirmary"), "extra stays verbatim: " + embedded);
+            assertFalse(embedded.contains("St. Alder Infirmary"), "extra (a hospital name) is dropped: " + embedded);
+            assertFalse(embedded.contains("Invented night resident"), "the assessor is dropped: " + embedded);
+            assertFalse(pdf.allText().contains("Invented night resident"), "the assessor on a page");
+            assertInstanceOf(org.stasissheet.intake.CaseReader.Accepted.class,
+                    org.stasissheet.intake.CaseReader.read(embedded.getBytes(StandardCharsets.UTF_8)),
+                    "the teaching copy's case reads back");
         }
         // the raw bytes hold no UTF-16 or UTF-8 trace of the label either (the font subset is not searched)
         assertFalse(new String(bytes, StandardCharsets.ISO_8859_1).contains("bed 4"));

@@ -14,6 +14,7 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.TimeUnit;
+import java.util.stream.Collectors;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -148,7 +149,8 @@ public final class Actions {
                     session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
                     remember(file);
                     markRunning();
-                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : ""));
+                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : "")
+                            + opened.warnings().stream().map(w -> ". Warning: " + w).collect(Collectors.joining()));
                     return;
                 }
             }
@@ -416,22 +418,26 @@ public final class Actions {
         return m.replaceAll("\\s*\\R\\s*", " ").trim();
     }
 
-    /** What opening a file gave: the case as JSON bytes, or why not. */
-    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf) {
+    /**
+     * What opening a file gave: the case as JSON bytes, or why not; {@code warnings} are what the reader should
+     * know about a case that was opened (a worksheet PDF without the digest of its case).
+     */
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
         Opened {
             Objects.requireNonNull(caseJson, "caseJson");
             problems = List.copyOf(problems);
+            warnings = List.copyOf(warnings);
         }
 
         Opened(byte[] caseJson, List<String> problems) {
-            this(caseJson, problems, false);
+            this(caseJson, problems, false, List.of());
         }
     }
 
     /** The file reads of {@link #openFile}, on the background thread. */
     static final class CaseOpening {
         /** The largest worksheet PDF read (the command line's limit too): 32 MiB. */
-        static final long MAX_PDF_BYTES = 32L << 20;
+        static final long MAX_PDF_BYTES = WorksheetPdfs.MAX_PDF_BYTES;
 
         private CaseOpening() {
         }
@@ -441,6 +447,10 @@ public final class Actions {
             if (Files.isDirectory(file)) {
                 return new Opened(new byte[0], List.of(file.getFileName() + " is a folder, not a case file"));
             }
+            if (!Files.isRegularFile(file)) {
+                // a FIFO would block the form for ever; a device never ends
+                return new Opened(new byte[0], List.of(file.getFileName() + " is not a regular file; it was not opened"));
+            }
             long size = Files.size(file);
             if (size > MAX_PDF_BYTES || (!pdfByName && size > CaseReader.MAX_BYTES && !startsAsPdf(file))) {
                 return new Opened(new byte[0], List.of(file.getFileName() + ": " + size
@@ -449,7 +459,8 @@ public final class Actions {
             byte[] bytes = Files.readAllBytes(file);
             if (WorksheetPdfs.looksLikePdf(file, bytes)) {
                 try {
-                    return new Opened(WorksheetPdfs.extractCase(bytes), List.of(), true);
+                    WorksheetPdfs.ReadBack back = WorksheetPdfs.read(bytes);
+                    return new Opened(back.caseJson(), List.of(), true, back.warnings());
                 } catch (IOException e) {
                     return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
                 }

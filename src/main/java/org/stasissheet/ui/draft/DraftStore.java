@@ -21,6 +21,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.UUID;
+import org.stasissheet.files.AtomicFiles;
 import org.stasissheet.ui.app.Storage;
 
 /**
@@ -88,7 +89,9 @@ public final class DraftStore {
                     read(id).ifPresent(found::add);
                 }
             }
-            // housekeeping: the marker and lock of sessions that ended, uncleanly, before they wrote any draft
+            // housekeeping: half-written drafts of killed autosaves (they may hold patient data) ...
+            AtomicFiles.removeStaleTemps(folder, Instant.now());
+            // ... and the marker and lock of sessions that ended, uncleanly, before they wrote any draft
             for (String id : otherSessions(MARKER_PREFIX, LOCK)) {
                 if (!Files.exists(draftOf(id)) && !running(id)) {
                     forget(id);

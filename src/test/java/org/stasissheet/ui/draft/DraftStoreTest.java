@@ -51,6 +51,20 @@ class DraftStoreTest {
     }
 
     @Test
+    @DisplayName("a half-written draft of a killed autosave (older than two minutes) is removed at the next start;"
+            + " a fresh one, which may be another window's save in progress, is kept")
+    void staleTemporaryDraftsRemoved() throws Exception {
+        Path data = Files.createDirectories(dir.resolve("data"));
+        Path stale = Files.write(data.resolve(".draft-abc.json.5f3e2a1b00c0ffee.tmp"), bytes("{\"patient\": {\"label\""));
+        Files.setLastModifiedTime(stale, FileTime.from(Instant.now().minus(
+                org.stasissheet.files.AtomicFiles.STALE_AFTER).minusSeconds(1)));
+        Path fresh = Files.write(data.resolve(".draft-def.json.0123456789abcdef.tmp"), bytes("{"));
+        new DraftStore(data).crashedDrafts();
+        assertFalse(Files.exists(stale), "patient data from a killed write does not stay behind");
+        assertTrue(Files.exists(fresh));
+    }
+
+    @Test
     @DisplayName("after a clean end nothing is offered and nothing of the session is left")
     void clean() throws Exception {
         DraftStore store = new DraftStore(dir);
