@@ -51,7 +51,7 @@ import picocli.CommandLine.Spec;
  * {@code summary.csv} is removed before the first new PDF is written and the new one is written whole at the end,
  * so a summary never stands beside worksheets it does not describe.
  */
-@Command(name = "triage", mixinStandardHelpOptions = true,
+@Command(name = "triage",
         description = "Assess every case (*.json, *.pdf) in DIR: a PDF each in OUTDIR and OUTDIR/summary.csv, "
                 + "most urgent first.")
 final class TriageCommand implements Callable<Integer> {

@@ -106,11 +106,11 @@ class RuleSetBoundsTest {
     void orderedPairs() {
         Map<String, byte[]> files = new TreeMap<>(RuleSources.shippedFiles());
         String estimates = new String(files.get("estimates.yaml"), StandardCharsets.UTF_8);
-        String equal = estimates.replace("value: 0.18", "value: 0.3");
-        assertTrue(equal.contains("value: 0.3\n    unit: \"L\"\n"), "the shipped red-cell volume is 0.18 L");
+        String equal = estimates.replace("value: 0.21", "value: 0.35");
+        assertTrue(equal.contains("value: 0.35\n    unit: \"L\"\n"), "the shipped red-cell volume is 0.21 L in a 0.35 L unit");
         files.put("estimates.yaml", equal.getBytes(StandardCharsets.UTF_8));
         assertInstanceOf(LoadResult.Loaded.class, RuleSetLoader.load(files, Optional.empty()));
-        files.put("estimates.yaml", estimates.replace("value: 0.18", "value: 0.31").getBytes(StandardCharsets.UTF_8));
+        files.put("estimates.yaml", estimates.replace("value: 0.21", "value: 0.36").getBytes(StandardCharsets.UTF_8));
         List<RuleProblem> problems = problems(files);
         assertTrue(problems.stream().anyMatch(p -> p.message().contains("must not be larger than")), problems.toString());
     }
