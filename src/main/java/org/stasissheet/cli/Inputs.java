@@ -10,6 +10,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.stasissheet.course.Course;
+import org.stasissheet.course.CourseReader;
 import org.stasissheet.files.RuleSources;
 import org.stasissheet.files.WorksheetPdfs;
 import org.stasissheet.intake.Case;
@@ -84,7 +86,41 @@ public final class Inputs {
         throw new InvalidInputException(lines);
     }
 
-    /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
+    /** A course with the JSON it was read from (the course file, or the one embedded in a course PDF). */
+    record LoadedCourse(byte[] json, Course value) {
+        LoadedCourse {
+            Objects.requireNonNull(json, "json");
+            Objects.requireNonNull(value, "value");
+            json = json.clone();
+        }
+
+        @Override
+        public byte[] json() {
+            return json.clone();
+        }
+    }
+
+    /** Whether these case-or-course bytes are a course ({@code "format": "stasis-course/1"}). */
+    static boolean isCourse(byte[] json) {
+        return CourseReader.claimsToBeCourse(json);
+    }
+
+    /** A course file or a course PDF, or every problem with its path in the file. */
+    static LoadedCourse loadCourse(Path file) {
+        return parseCourse(file, caseBytes(file));
+    }
+
+    static LoadedCourse parseCourse(Path file, byte[] json) {
+        CourseReader.Result result = CourseReader.read(json);
+        if (result instanceof CourseReader.Accepted accepted) {
+            return new LoadedCourse(json, accepted.course());
+        }
+        List<String> lines = new ArrayList<>();
+        lines.add(file + ": the course was not read; nothing was assessed.");
+        ((CourseReader.Rejected) result).problems().forEach(p -> lines.add("  " + p));
+        throw new InvalidInputException(lines);
+    }
+
     /** The shipped rule set, or the local protocol in {@code dir}; a refused set lists every problem. */
     public static RuleSet ruleSet(Optional<Path> dir) {
         LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);
