@@ -43,12 +43,14 @@ final class CourseCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Inputs.LoadedCourse loaded = Inputs.loadCourse(courseFile);
-        CourseReport report = CourseAssessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
+        // the bytes read once: assessed here and, for the PDF, embedded as the record
+        byte[] courseJson = Inputs.caseBytes(courseFile);
+        CourseReport report = CourseAssessor.assess(Inputs.parseCourse(courseFile, courseJson),
+                Inputs.ruleSet(rules.dir()));
         PrintWriter out = spec.commandLine().getOut();
         if (output != null) {
             OutputFiles.write(output, CoursePdf.render(report, layout.options(), OffsetDateTime.now(),
-                    loaded.json()));
+                    courseJson));
             out.println("wrote " + output);
         } else {
             out.print(json ? CourseJson.render(report) : CourseText.render(report));

@@ -24,7 +24,7 @@ final class CourseInputs {
             }
             return Inputs.parseCase(file, json);
         }
-        Course course = Inputs.parseCourse(file, json).value();
+        Course course = Inputs.parseCourse(file, json);
         int last = course.assessments().size() - 1;
         if (at.isEmpty()) {
             return course.caseAt(last);

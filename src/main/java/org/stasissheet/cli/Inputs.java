@@ -86,34 +86,16 @@ public final class Inputs {
         throw new InvalidInputException(lines);
     }
 
-    /** A course with the JSON it was read from (the course file, or the one embedded in a course PDF). */
-    record LoadedCourse(byte[] json, Course value) {
-        LoadedCourse {
-            Objects.requireNonNull(json, "json");
-            Objects.requireNonNull(value, "value");
-            json = json.clone();
-        }
-
-        @Override
-        public byte[] json() {
-            return json.clone();
-        }
-    }
-
     /** Whether these case-or-course bytes are a course ({@code "format": "stasis-course/1"}). */
     static boolean isCourse(byte[] json) {
         return CourseReader.claimsToBeCourse(json);
     }
 
-    /** A course file or a course PDF, or every problem with its path in the file. */
-    static LoadedCourse loadCourse(Path file) {
-        return parseCourse(file, caseBytes(file));
-    }
-
-    static LoadedCourse parseCourse(Path file, byte[] json) {
+    /** The course in these bytes (a course file's, or the one embedded in a course PDF), or every problem. */
+    static Course parseCourse(Path file, byte[] json) {
         CourseReader.Result result = CourseReader.read(json);
         if (result instanceof CourseReader.Accepted accepted) {
-            return new LoadedCourse(json, accepted.course());
+            return accepted.course();
         }
         List<String> lines = new ArrayList<>();
         lines.add(file + ": the course was not read; nothing was assessed.");

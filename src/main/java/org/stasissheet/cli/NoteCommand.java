@@ -38,7 +38,7 @@ final class NoteCommand implements Callable<Integer> {
         byte[] json = Inputs.caseBytes(caseFile);
         PrintWriter out = spec.commandLine().getOut();
         if (Inputs.isCourse(json)) {
-            Course course = Inputs.parseCourse(caseFile, json).value();
+            Course course = Inputs.parseCourse(caseFile, json);
             out.print(CourseText.note(CourseAssessor.assess(course, Inputs.ruleSet(rules.dir())), withIdentifiers));
             out.flush();
             return ExitCode.DONE;

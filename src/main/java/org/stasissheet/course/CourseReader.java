@@ -16,6 +16,7 @@ import java.util.Set;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.CaseReader;
 import org.stasissheet.intake.CaseReader.Problem;
+import org.stasissheet.intake.Enums;
 import org.stasissheet.measure.Numbers;
 import org.stasissheet.measure.Quantity;
 
@@ -265,10 +266,10 @@ public final class CourseReader {
             }
             JsonNode fluid = body.get("replacement");
             Optional<Procedure.Replacement> replacement = fluid == null || !fluid.isTextual() ? Optional.empty()
-                    : Procedure.Replacement.fromCode(fluid.asText());
+                    : Enums.parse(Procedure.Replacement.class, fluid.asText());
             if (replacement.isEmpty()) {
                 add(path + ".replacement", (fluid == null ? "missing" : fluid + " is not a replacement fluid")
-                        + "; write albumin, plasma or albumin-and-plasma");
+                        + "; write " + Enums.allowed(Procedure.Replacement.class));
                 return Optional.empty();
             }
             Optional<Double> v = volumes;

@@ -3,6 +3,7 @@ package org.stasissheet.course;
 import java.time.OffsetDateTime;
 import java.util.Objects;
 import java.util.Optional;
+import org.stasissheet.intake.Enums;
 import org.stasissheet.measure.Quantity;
 
 /**
@@ -21,7 +22,7 @@ public sealed interface Procedure extends CourseEntry
     String kind();
 
     /** The replacement fluid of a plasma exchange. */
-    enum Replacement {
+    enum Replacement implements Enums.Coded {
         ALBUMIN("albumin", "albumin"), PLASMA("plasma", "plasma"),
         ALBUMIN_AND_PLASMA("albumin-and-plasma", "albumin and plasma");
 
@@ -33,21 +34,13 @@ public sealed interface Procedure extends CourseEntry
             this.words = words;
         }
 
+        @Override
         public String code() {
             return code;
         }
 
         public String words() {
             return words;
-        }
-
-        public static Optional<Replacement> fromCode(String code) {
-            for (Replacement r : values()) {
-                if (r.code.equals(code)) {
-                    return Optional.of(r);
-                }
-            }
-            return Optional.empty();
         }
     }
 

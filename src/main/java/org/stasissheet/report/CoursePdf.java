@@ -1,27 +1,18 @@
 package org.stasissheet.report;
 
-import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
 import com.lowagie.text.Font;
 import com.lowagie.text.Paragraph;
-import com.lowagie.text.Rectangle;
-import com.lowagie.text.pdf.ColumnText;
 import com.lowagie.text.pdf.PdfContentByte;
-import com.lowagie.text.pdf.PdfDate;
-import com.lowagie.text.pdf.PdfFileSpecification;
-import com.lowagie.text.pdf.PdfName;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfPageEventHelper;
 import com.lowagie.text.pdf.PdfWriter;
 import java.awt.Color;
 import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.time.OffsetDateTime;
-import java.util.GregorianCalendar;
 import java.util.List;
 import java.util.Objects;
 import org.stasissheet.course.AnalyteCheck;
@@ -42,7 +33,6 @@ import org.stasissheet.worksheet.Worksheet;
 public final class CoursePdf {
     public static final String TITLE = "Stasis Sheet course of treatment";
     private static final float MARGIN = 40;
-    private static final float BAND = 70;
     private static final Color HEAD_FILL = new Color(0xee, 0xee, 0xee);
 
     private final CourseReport report;
@@ -68,19 +58,11 @@ public final class CoursePdf {
 
     private byte[] render() {
         ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
-        Rectangle page = options.paper().size();
-        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + BAND, MARGIN + 20);
+        Document doc = WorksheetPdf.document(options.paper().size(), CourseText.cautions(report));
         try {
-            PdfWriter writer = PdfWriter.getInstance(doc, out);
-            writer.setPageEvent(new Frame());
-            writer.setStrictImageSequence(true);
-            doc.addTitle(TITLE);
-            doc.addCreator("Stasis Sheet " + options.toolVersion());
-            PdfDate generated = new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime()));
-            doc.open();
-            writer.getInfo().put(PdfName.CREATIONDATE, generated);
-            writer.getInfo().put(PdfName.MODDATE, generated);
-            attach(writer);
+            PdfWriter writer = WorksheetPdf.open(doc, out, new Frame(), options, generatedAt, TITLE);
+            WorksheetPdf.attach(writer, courseJson, options.includeIdentifiers(),
+                    "The course file this report was made from (stasis-course/1)");
             latest(doc);
             charts(doc, writer);
             entries(doc);
@@ -213,58 +195,17 @@ public final class CoursePdf {
         return c;
     }
 
-    private void attach(PdfWriter writer) {
-        try {
-            byte[] bytes = options.includeIdentifiers() ? courseJson : WorksheetPdf.withoutLabel(courseJson);
-            PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, WorksheetPdf.ATTACHMENT_NAME,
-                    bytes, true, "application/json", null);
-            writer.addFileAttachment("The course file this report was made from (stasis-course/1)", spec);
-        } catch (IOException e) {
-            throw new UncheckedIOException("the course file could not be attached", e);
-        }
-    }
-
     /** The cautions at the top of every page and the page number with a running footer at the foot. */
     private final class Frame extends PdfPageEventHelper {
         @Override
         public void onEndPage(PdfWriter writer, Document document) {
             PdfContentByte cb = writer.getDirectContent();
-            Rectangle page = document.getPageSize();
-            float left = MARGIN;
-            float right = page.getWidth() - MARGIN;
-            float top = page.getHeight() - MARGIN + 14;
-            float bottom = top - BAND + 8;
-            cb.saveState();
-            cb.setLineWidth(1.2f);
-            cb.rectangle(left, bottom, right - left, top - bottom);
-            cb.stroke();
-            cb.restoreState();
-            ColumnText ct = new ColumnText(cb);
-            ct.setSimpleColumn(left + 5, bottom + 2, right - 5, top - 3);
-            Paragraph p = new Paragraph();
-            p.setLeading(8.4f);
-            p.add(new Chunk("CAUTION  ", WorksheetPdf.font(PdfFonts.bold(), 7.2f)));
-            boolean first = true;
-            for (String caution : CourseText.cautions(report)) {
-                if (!first) {
-                    p.add(Chunk.NEWLINE);
-                }
-                p.add(new Chunk(PdfFonts.printable(caution),
-                        WorksheetPdf.font(first ? PdfFonts.bold() : PdfFonts.regular(), 7.2f)));
-                first = false;
-            }
-            ct.addElement(p);
-            try {
-                if (ColumnText.hasMoreText(ct.go())) {
-                    throw new IllegalStateException("the cautions do not fit the caution band");
-                }
-            } catch (DocumentException e) {
-                throw new IllegalStateException("caution band could not be laid out", e);
-            }
+            com.lowagie.text.Rectangle page = document.getPageSize();
+            WorksheetPdf.cautionBand(cb, page, CourseText.cautions(report));
             cb.beginText();
             cb.setFontAndSize(PdfFonts.regular(), 7.5f);
             cb.showTextAligned(Element.ALIGN_LEFT, PdfFonts.printable(TITLE + " · generated "
-                    + ReportTime.FORMAT.format(generatedAt) + " · Page " + writer.getPageNumber()), left,
+                    + ReportTime.FORMAT.format(generatedAt) + " · Page " + writer.getPageNumber()), MARGIN,
                     MARGIN - 14, 0);
             cb.endText();
         }
