@@ -36,7 +36,8 @@ public record AnalyteCheck(Analyte analyte, Quantity before, OffsetDateTime befo
     /**
      * The next measured value beside the projection.
      *
-     * @param differenceFromLowPercent  (measured − projected low) ÷ projected low × 100; empty when the projection is 0
+     * @param differenceFromLowPercent  (measured − projected low) ÷ projected low × 100; empty without a projection
+     *                                  or when it is 0
      * @param differenceFromHighPercent the same against the projected high
      * @param review                    whether the measured fall is much smaller than projected (see
      *                                  {@link #REVIEW_FRACTION_OF_PROJECTED_FALL})
@@ -51,8 +52,15 @@ public record AnalyteCheck(Analyte analyte, Quantity before, OffsetDateTime befo
         }
     }
 
-    /** Compares a measured value with a projection from {@code start}; pure arithmetic, one place. */
-    static Comparison compare(double start, Projected p, Quantity measured, OffsetDateTime at) {
+    /**
+     * Compares a measured value with a projection from {@code start}; pure arithmetic, one place. Without a
+     * projection the measured value still stands, with no difference and no review mark.
+     */
+    static Comparison compare(double start, Optional<Projected> projected, Quantity measured, OffsetDateTime at) {
+        if (projected.isEmpty()) {
+            return new Comparison(measured, at, Optional.empty(), Optional.empty(), false);
+        }
+        Projected p = projected.get();
         double value = measured.value();
         double smallestProjectedFall = start - p.high();
         boolean review = smallestProjectedFall > 0

@@ -138,7 +138,7 @@ public final class CourseAssessor {
             }
             if (e instanceof CourseEntry.Assessment later && later.moment().labs().has(a)) {
                 Quantity measured = new Quantity(later.moment().labs().canonical(a).orElseThrow(), a.canonicalUnit());
-                next = projected.known().map(pr -> AnalyteCheck.compare(startValue, pr, measured, later.at()));
+                next = Optional.of(AnalyteCheck.compare(startValue, projected.known(), measured, later.at()));
             }
         }
         return Optional.of(new AnalyteCheck(a, new Quantity(startValue, a.canonicalUnit()), start.at(), projected,

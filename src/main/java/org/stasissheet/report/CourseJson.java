@@ -104,8 +104,11 @@ public final class CourseJson {
                     v.put("value", m.measured().value());
                     v.put("unit", m.measured().unit());
                     v.put("at", time(m.at()));
+                    if (c.projected().known().isEmpty()) {
+                        return;
+                    }
                     ObjectNode d = comparison.putObject(key);
-                    String[] names = lowHighNames(c.projected().known().orElseThrow());
+                    String[] names = lowHighNames(c.projected().known().get());
                     m.differenceFromLowPercent().ifPresent(x -> d.put(names[0] + "DifferencePercent", x));
                     m.differenceFromHighPercent().ifPresent(x -> d.put(names[1] + "DifferencePercent", x));
                     d.put("review", m.review());
@@ -116,6 +119,8 @@ public final class CourseJson {
             }
             if (!next.isEmpty()) {
                 n.set("measuredNext", next);
+            }
+            if (!comparison.isEmpty()) {
                 n.set("comparison", comparison);
             }
             n.put("review", review.needsReview());

@@ -133,7 +133,7 @@ public final class CourseText {
                 sb.append("        measured next: none yet").append(NL);
             }
             c.next().ifPresent(m -> {
-                String[] names = names(c.projected().known().orElseThrow());
+                String[] names = c.projected().known().map(CourseText::names).orElse(new String[] {"", ""});
                 sb.append("        measured next ").append(amount(m.measured().value(), c.analyte())).append(" at ")
                         .append(ReportTime.FORMAT.format(m.at()));
                 m.differenceFromLowPercent().ifPresent(d -> sb.append("; ").append(percent(d)).append(" against ")
