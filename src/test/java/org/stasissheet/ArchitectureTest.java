@@ -13,7 +13,7 @@ class ArchitectureTest {
     private static final String[] CORE = {
         "org.stasissheet.measure..", "org.stasissheet.intake..", "org.stasissheet.rules..",
         "org.stasissheet.derived..", "org.stasissheet.flow..", "org.stasissheet.apheresis..",
-        "org.stasissheet.worksheet..", "org.stasissheet.labs.."
+        "org.stasissheet.worksheet..", "org.stasissheet.labs..", "org.stasissheet.course.."
     };
     private static final String[] ADAPTERS = {
         "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui..",

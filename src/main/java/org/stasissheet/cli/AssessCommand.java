@@ -2,6 +2,8 @@ package org.stasissheet.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.time.OffsetDateTime;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.stasissheet.report.WorksheetJson;
 import org.stasissheet.report.WorksheetText;
@@ -18,11 +20,16 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "assess",
         description = "Read one case (a case JSON file or a worksheet PDF) and print its worksheet.")
 final class AssessCommand implements Callable<Integer> {
-    @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")
+    @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON), a course file (stasis-course/1) or a "
+            + "worksheet or course PDF")
     Path caseFile;
 
     @Option(names = "--json", description = "print the stasis-worksheet/1 JSON object instead of text")
     boolean json;
+
+    @Option(names = "--at", paramLabel = "ISO-TIME", description = "for a course: the assessment at or before this "
+            + "time, ISO-8601 with offset (default: the latest)")
+    OffsetDateTime at;
 
     @Mixin
     RulesOption rules;
@@ -32,7 +39,8 @@ final class AssessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile, spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
+        Worksheet sheet = Assessor.assess(CourseInputs.caseOf(caseFile, Optional.ofNullable(at),
+                spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
         PrintWriter out = spec.commandLine().getOut();
         out.print(json ? WorksheetJson.render(sheet) : WorksheetText.render(sheet));
         out.flush();

@@ -10,6 +10,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.stasissheet.course.Course;
+import org.stasissheet.course.CourseReader;
 import org.stasissheet.files.RuleSources;
 import org.stasissheet.files.WorksheetPdfs;
 import org.stasissheet.intake.Case;
@@ -55,13 +57,32 @@ public final class Inputs {
     }
 
     static LoadedCase loadCase(Path file) {
+        LoadedRecord record = loadRecord(file);
+        return new LoadedCase(record.json(), parseCase(file, record.json()), record.warnings());
+    }
+
+    /** The JSON record of a case or course file, or the one embedded in a worksheet or course PDF, with warnings. */
+    record LoadedRecord(byte[] json, List<String> warnings) {
+        LoadedRecord {
+            json = json.clone();
+            warnings = List.copyOf(warnings);
+        }
+
+        @Override
+        public byte[] json() {
+            return json.clone();
+        }
+    }
+
+    /** Reads the record: a JSON file's bytes (1 MiB at most), or a PDF's embedded record through the checked read-back. */
+    static LoadedRecord loadRecord(Path file) {
         byte[] bytes = readLimited(file, WorksheetPdfs.MAX_PDF_BYTES);
         if (!WorksheetPdfs.looksLikePdf(file, bytes)) {
             if (bytes.length > CaseReader.MAX_BYTES) {
                 throw unreadable(file, "it is larger than " + CaseReader.MAX_BYTES + " bytes (1 MiB), the most a "
                         + "case file may be");
             }
-            return new LoadedCase(bytes, parseCase(file, bytes), List.of());
+            return new LoadedRecord(bytes, List.of());
         }
         WorksheetPdfs.ReadBack back;
         try {
@@ -69,8 +90,15 @@ public final class Inputs {
         } catch (IOException e) {
             throw unreadable(file, e.getMessage());
         }
-        byte[] json = back.caseJson();
-        return new LoadedCase(json, parseCase(file, json), back.warnings());
+        return new LoadedRecord(back.caseJson(), back.warnings());
+    }
+
+    /** The record's bytes; its warnings (a read-back without a digest) go to {@code err}. */
+    static byte[] caseBytes(Path file, java.io.PrintWriter err) {
+        LoadedRecord record = loadRecord(file);
+        record.warnings().forEach(w -> err.println("warning: " + file + ": " + w));
+        err.flush();
+        return record.json();
     }
 
     /** The case in these bytes, or every problem with its path in the file. */
@@ -85,7 +113,23 @@ public final class Inputs {
         throw new InvalidInputException(lines);
     }
 
-    /** The shipped set, or the local protocol in {@code dir}; a refused set lists every problem (exit 2). */
+    /** Whether these case-or-course bytes are a course ({@code "format": "stasis-course/1"}). */
+    static boolean isCourse(byte[] json) {
+        return CourseReader.claimsToBeCourse(json);
+    }
+
+    /** The course in these bytes (a course file's, or the one embedded in a course PDF), or every problem. */
+    static Course parseCourse(Path file, byte[] json) {
+        CourseReader.Result result = CourseReader.read(json);
+        if (result instanceof CourseReader.Accepted accepted) {
+            return accepted.course();
+        }
+        List<String> lines = new ArrayList<>();
+        lines.add(file + ": the course was not read; nothing was assessed.");
+        ((CourseReader.Rejected) result).problems().forEach(p -> lines.add("  " + p));
+        throw new InvalidInputException(lines);
+    }
+
     /** The shipped rule set, or the local protocol in {@code dir}; a refused set lists every problem. */
     public static RuleSet ruleSet(Optional<Path> dir) {
         LoadResult result = dir.map(RuleSources::folder).orElseGet(RuleSources::shipped);

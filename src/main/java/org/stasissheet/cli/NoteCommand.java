@@ -3,6 +3,9 @@ package org.stasissheet.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.stasissheet.course.Course;
+import org.stasissheet.course.CourseAssessor;
+import org.stasissheet.report.CourseText;
 import org.stasissheet.report.HandoffNote;
 import org.stasissheet.worksheet.Assessor;
 import org.stasissheet.worksheet.Worksheet;
@@ -17,7 +20,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "note",
         description = "Print a 3-20 line handoff note (situation, background, assessment, recommendation).")
 final class NoteCommand implements Callable<Integer> {
-    @Parameters(paramLabel = "CASE", description = "the case file (stasis-case/1 JSON) or a worksheet PDF")
+    @Parameters(paramLabel = "CASE", description = "the case file, a course file (adds one line of trend) or a worksheet or "
+            + "course PDF")
     Path caseFile;
 
     @Option(names = "--with-identifiers", description = "include the patient label (left out by default)")
@@ -31,8 +35,15 @@ final class NoteCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Worksheet sheet = Assessor.assess(Inputs.readCase(caseFile, spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
+        byte[] json = Inputs.caseBytes(caseFile, spec.commandLine().getErr());
         PrintWriter out = spec.commandLine().getOut();
+        if (Inputs.isCourse(json)) {
+            Course course = Inputs.parseCourse(caseFile, json);
+            out.print(CourseText.note(CourseAssessor.assess(course, Inputs.ruleSet(rules.dir())), withIdentifiers));
+            out.flush();
+            return ExitCode.DONE;
+        }
+        Worksheet sheet = Assessor.assess(Inputs.parseCase(caseFile, json), Inputs.ruleSet(rules.dir()));
         out.print(HandoffNote.render(sheet, withIdentifiers));
         out.flush();
         return ExitCode.DONE;

@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
         description = "Sourced worksheet for hyperviscosity syndrome and leukostasis risk. "
                 + "Decision support only: it supports, and never replaces, clinical judgement, local protocols "
                 + "and licensed practice.",
-        subcommands = {AssessCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
+        subcommands = {AssessCommand.class, CourseCommand.class, PdfCommand.class, NoteCommand.class, TriageCommand.class,
                 RulesCommand.class, RegisterCommand.class, LabsCommand.class, ExportCommand.class})
 public final class StasisCommand implements Runnable {
     /** The one program name: the jar, the launcher and every usage line. */

@@ -1,7 +1,9 @@
 package org.stasissheet.intake;
 
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Reads a {@code stasis-case/1} file from its bytes. Pure: no file access, no clock, no locale.
@@ -93,6 +95,32 @@ public final class CaseReader {
         }
         CaseDocument document = CaseDocument.from(tree.get(), problems);
         Case c = CaseConversion.toCase(document, problems);
+        return problems.isEmpty() ? new Accepted(c) : new Rejected(problems.list());
+    }
+
+    /**
+     * Step 1 alone, for documents that hold case parts (a course): the strict JSON tree or every problem found.
+     * Exactly one of the two is present.
+     */
+    public record Parsed(Optional<ObjectNode> tree, List<Problem> problems) {
+        public Parsed {
+            Objects.requireNonNull(tree, "tree");
+            problems = List.copyOf(problems);
+        }
+    }
+
+    public static Parsed parse(byte[] bytes) {
+        Objects.requireNonNull(bytes, "bytes");
+        Problems problems = new Problems();
+        Optional<ObjectNode> tree = JsonTree.parse(bytes, problems);
+        return problems.isEmpty() ? new Parsed(tree, List.of()) : new Parsed(Optional.empty(), problems.list());
+    }
+
+    /** Steps 2 and 3 on a tree already read strictly by {@link #parse}; paths are relative to that tree. */
+    public static Result read(ObjectNode tree) {
+        Objects.requireNonNull(tree, "tree");
+        Problems problems = new Problems();
+        Case c = CaseConversion.toCase(CaseDocument.from(tree, problems), problems);
         return problems.isEmpty() ? new Accepted(c) : new Rejected(problems.list());
     }
 }

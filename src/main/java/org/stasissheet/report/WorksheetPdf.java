@@ -102,22 +102,10 @@ public final class WorksheetPdf {
     private byte[] render() {
         ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
         Rectangle page = options.paper().size();
-        float band = cautionBandHeight(page.getWidth());
-        Document doc = new Document(page, MARGIN, MARGIN, MARGIN + band - 8, MARGIN + FOOTER_BAND - 10);
+        Document doc = document(page, sheet.cautions());
         try {
-            PdfWriter writer = PdfWriter.getInstance(doc, out);
-            writer.setPageEvent(new PageFrame());
-            writer.setFullCompression();
-            // keep the chart where it belongs, between its heading and its table, even when it moves to a new page
-            writer.setStrictImageSequence(true);
-            doc.addTitle(TITLE);
-            doc.addCreator("Stasis Sheet " + options.toolVersion());
-            // both dates are the generation time handed in: the renderer reads no clock of its own
-            PdfDate generated = new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime()));
-            doc.open();
-            writer.getInfo().put(PdfName.CREATIONDATE, generated);
-            writer.getInfo().put(PdfName.MODDATE, generated);
-            attachCase(writer);
+            PdfWriter writer = open(doc, out, new PageFrame(), options, generatedAt, TITLE);
+            attach(writer, embedded, "The case file this worksheet was made from (stasis-case/1)");
             header(doc);
             PdfVerdictSections.verdicts(this, doc);
             inputs(doc);
@@ -361,18 +349,42 @@ public final class WorksheetPdf {
         }
     }
 
+    /** A page with room for the caution band above and the footer below; shared by every PDF the tool writes. */
+    static Document document(Rectangle page, List<String> cautions) {
+        float band = cautionBandHeight(page.getWidth(), cautions);
+        return new Document(page, MARGIN, MARGIN, MARGIN + band - 8, MARGIN + FOOTER_BAND - 10);
+    }
+
+    /** Opens the document with its page frame, title, creator and generation time (handed in: no clock here). */
+    static PdfWriter open(Document doc, ByteArrayOutputStream out, PdfPageEventHelper frame, PdfOptions options,
+                          OffsetDateTime generatedAt, String title) throws DocumentException {
+        PdfWriter writer = PdfWriter.getInstance(doc, out);
+        writer.setPageEvent(frame);
+        writer.setFullCompression();
+        // keep a chart where it belongs, between its heading and its table, even when it moves to a new page
+        writer.setStrictImageSequence(true);
+        doc.addTitle(title);
+        doc.addCreator("Stasis Sheet " + options.toolVersion());
+        PdfDate generated = new PdfDate(GregorianCalendar.from(generatedAt.toZonedDateTime()));
+        doc.open();
+        writer.getInfo().put(PdfName.CREATIONDATE, generated);
+        writer.getInfo().put(PdfName.MODDATE, generated);
+        return writer;
+    }
+
     /**
-     * Embeds the case and records its SHA-256 in the document information as {@value #CASE_DIGEST_KEY}, apart
-     * from the attachment: an edit of the embedded case alone no longer matches, and read-back refuses it.
+     * Embeds a JSON record as {@link #ATTACHMENT_NAME} and records its SHA-256 in the document information as
+     * {@value #CASE_DIGEST_KEY}, apart from the attachment: an edit of the embedded record alone no longer matches,
+     * and read-back refuses it. Shared by every PDF the tool writes.
      */
-    private void attachCase(PdfWriter writer) {
+    static void attach(PdfWriter writer, byte[] bytes, String description) {
         try {
-            PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, ATTACHMENT_NAME, embedded,
+            PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, ATTACHMENT_NAME, bytes,
                     true, "application/json", null);
-            writer.addFileAttachment("The case file this worksheet was made from (stasis-case/1)", spec);
-            writer.getInfo().put(new PdfName(CASE_DIGEST_KEY), new PdfString(embeddedSha256));
+            writer.addFileAttachment(description, spec);
+            writer.getInfo().put(new PdfName(CASE_DIGEST_KEY), new PdfString(WorksheetPdfs.sha256(bytes)));
         } catch (IOException e) {
-            throw new UncheckedIOException("the case file could not be attached", e);
+            throw new UncheckedIOException("the record could not be attached", e);
         }
     }
 
@@ -393,17 +405,54 @@ public final class WorksheetPdf {
      * The height of the caution band: one line per caution, more where a caution wraps (measured in the font),
      * so a longer caution makes the band taller instead of being cut short.
      */
-    private float cautionBandHeight(float pageWidth) {
+    private static float cautionBandHeight(float pageWidth, List<String> cautions) {
         float width = pageWidth - 2 * MARGIN - 10;
         int lines = 0;
         boolean first = true;
-        for (String caution : sheet.cautions()) {
+        for (String caution : cautions) {
             String text = first ? "CAUTION  " + caution : caution;
             BaseFont f = first ? PdfFonts.bold() : PdfFonts.regular();
             lines += (int) Math.ceil(f.getWidthPoint(PdfFonts.printable(text), CAUTION_SIZE) * 1.05 / width);
             first = false;
         }
         return Math.max(1, lines) * CAUTION_LEADING + 16;
+    }
+
+    /** The cautions, boxed at the top of a page: every page of every PDF the tool writes carries them. */
+    static void cautionBand(PdfContentByte cb, Rectangle page, List<String> cautions) {
+        float left = MARGIN;
+        float right = page.getWidth() - MARGIN;
+        float top = page.getHeight() - MARGIN + 14;
+        float bottom = top - cautionBandHeight(page.getWidth(), cautions) + 6;
+        cb.saveState();
+        cb.setLineWidth(1.2f);
+        cb.setColorStroke(Color.BLACK);
+        cb.rectangle(left, bottom, right - left, top - bottom);
+        cb.stroke();
+        cb.restoreState();
+        ColumnText ct = new ColumnText(cb);
+        ct.setSimpleColumn(left + 5, bottom + 2, right - 5, top - 3);
+        Paragraph p = new Paragraph();
+        p.setLeading(CAUTION_LEADING);
+        p.add(new Chunk("CAUTION  ", font(PdfFonts.bold(), CAUTION_SIZE)));
+        boolean first = true;
+        for (String caution : cautions) {
+            if (!first) {
+                p.add(Chunk.NEWLINE);
+            }
+            p.add(new Chunk(PdfFonts.printable(caution),
+                    font(first ? PdfFonts.bold() : PdfFonts.regular(), CAUTION_SIZE)));
+            first = false;
+        }
+        ct.addElement(p);
+        try {
+            if (ColumnText.hasMoreText(ct.go())) {
+                // a caution cut short is worse than no PDF: fail loudly so the band gets made taller
+                throw new IllegalStateException("the standing cautions do not fit the caution band");
+            }
+        } catch (DocumentException e) {
+            throw new IllegalStateException("caution band could not be laid out", e);
+        }
     }
 
     /** The cautions at the top of every page and "Page X of Y" with a short running footer at the foot. */
@@ -420,44 +469,8 @@ public final class WorksheetPdf {
         public void onEndPage(PdfWriter writer, Document document) {
             PdfContentByte cb = writer.getDirectContent();
             Rectangle page = document.getPageSize();
-            cautionBand(cb, page);
+            cautionBand(cb, page, sheet.cautions());
             footer(cb, page, writer.getPageNumber());
-        }
-
-        private void cautionBand(PdfContentByte cb, Rectangle page) {
-            float left = MARGIN;
-            float right = page.getWidth() - MARGIN;
-            float top = page.getHeight() - MARGIN + 14;
-            float bottom = top - cautionBandHeight(page.getWidth()) + 6;
-            cb.saveState();
-            cb.setLineWidth(1.2f);
-            cb.setColorStroke(Color.BLACK);
-            cb.rectangle(left, bottom, right - left, top - bottom);
-            cb.stroke();
-            cb.restoreState();
-            ColumnText ct = new ColumnText(cb);
-            ct.setSimpleColumn(left + 5, bottom + 2, right - 5, top - 3);
-            Paragraph p = new Paragraph();
-            p.setLeading(CAUTION_LEADING);
-            p.add(new Chunk("CAUTION  ", font(PdfFonts.bold(), CAUTION_SIZE)));
-            boolean first = true;
-            for (String caution : sheet.cautions()) {
-                if (!first) {
-                    p.add(Chunk.NEWLINE);
-                }
-                p.add(new Chunk(PdfFonts.printable(caution),
-                        font(first ? PdfFonts.bold() : PdfFonts.regular(), CAUTION_SIZE)));
-                first = false;
-            }
-            ct.addElement(p);
-            try {
-                if (ColumnText.hasMoreText(ct.go())) {
-                    // a caution cut short is worse than no PDF: fail loudly so the band gets made taller
-                    throw new IllegalStateException("the standing cautions do not fit the caution band");
-                }
-            } catch (DocumentException e) {
-                throw new IllegalStateException("caution band could not be laid out", e);
-            }
         }
 
         private void footer(PdfContentByte cb, Rectangle page, int number) {
