@@ -431,7 +431,7 @@ class ReliabilityTest {
                 {"flow.referenceHematocrit", "0"}, {"flow.referenceHematocrit", "1"},
                 {"flow.referenceHematocrit", "5"}, {"flow.referenceSerumViscosity", "0"},
                 {"flow.referenceSerumViscosity", "-1"}, {"transfusion.unitVolume", "0"},
-                {"leukocrit.volume.myeloblast", "0"},
+                {"leukocrit.volume.myeloblast.low", "0"},
             };
             for (String[] c : cases) {
                 Path rules = copyRules();
