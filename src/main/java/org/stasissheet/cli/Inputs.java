@@ -50,10 +50,7 @@ public final class Inputs {
      * read-back PDF go to {@code err} before anything else is printed.
      */
     static Case readCase(Path file, java.io.PrintWriter err) {
-        LoadedCase loaded = loadCase(file);
-        loaded.warnings().forEach(w -> err.println("warning: " + file + ": " + w));
-        err.flush();
-        return loaded.value();
+        return parseCase(file, caseBytes(file, err));
     }
 
     static LoadedCase loadCase(Path file) {
