@@ -15,6 +15,7 @@ final class DecimalText {
     }
 
     private static final Pattern PLAIN = Pattern.compile("\\d+");
+    private static final Pattern DIGITS = Pattern.compile("\\d+(?:\\.\\d+)?");
     private static final Pattern ONE_SEPARATOR = Pattern.compile("(\\d+)([.,])(\\d+)");
     private static final Pattern GROUPED = Pattern.compile("\\d{1,3}(?:([.,])\\d{3})+(?:([.,])(\\d+))?");
 
@@ -45,6 +46,10 @@ final class DecimalText {
                 digits = digits.replace(decimalSeparator, ".");
             }
             if (decimalSeparator == null && token.indexOf(group) == token.lastIndexOf(group)) {
+                return List.of();
+            }
+            // mixed grouping marks ("1.234,567.8") leave more than one decimal point: not a number we read
+            if (!DIGITS.matcher(digits).matches()) {
                 return List.of();
             }
             return List.of(new BigDecimal(digits));
