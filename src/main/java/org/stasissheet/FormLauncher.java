@@ -11,7 +11,7 @@ final class FormLauncher {
     }
 
     static boolean available() {
-        return Main.class.getClassLoader().getResource(FORM_CLASS.replace('.', '/') + ".class") != null;
+        return FormLauncher.class.getClassLoader().getResource(FORM_CLASS.replace('.', '/') + ".class") != null;
     }
 
     static void launch(String[] args) {

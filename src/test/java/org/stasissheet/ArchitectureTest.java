@@ -17,7 +17,7 @@ class ArchitectureTest {
     };
     private static final String[] ADAPTERS = {
         "org.stasissheet.files..", "org.stasissheet.report..", "org.stasissheet.cli..", "org.stasissheet.ui..",
-        "org.stasissheet.interop.."
+        "org.stasissheet.interop..", "org.stasissheet.load.."
     };
 
     @ArchTest
@@ -82,6 +82,22 @@ class ArchitectureTest {
     static final ArchRule onlyInteropKnowsHapi = noClasses().that().resideOutsideOfPackage("org.stasissheet.interop..")
             .should().dependOnClassesThat().resideInAnyPackage("ca.uhn..", "org.hl7..")
             .because("the FHIR and HL7 libraries stay behind one adapter, loaded only by the commands that use it");
+
+    @ArchTest
+    static final ArchRule formAndCommandLineStandSideBySide = noClasses().that().resideInAPackage("org.stasissheet.ui..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.stasissheet.cli..")
+            .orShould().dependOnClassesThat().haveFullyQualifiedName("org.stasissheet.Main")
+            .because("the form and the command line share their loading seam in the load package, not each other");
+
+    @ArchTest
+    static final ArchRule commandLineKnowsNoForm = noClasses().that().resideInAPackage("org.stasissheet.cli..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.stasissheet.ui..")
+            .because("the command line must run without the form");
+
+    @ArchTest
+    static final ArchRule loadingSeamKnowsNeitherAdapter = noClasses().that().resideInAPackage("org.stasissheet.load..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.stasissheet.cli..", "org.stasissheet.ui..")
+            .because("both adapters build on it, so it must not lean on either");
 
     @ArchTest
     static final ArchRule noNetworkCode = noClasses().should().dependOnClassesThat().resideInAnyPackage("java.net..")

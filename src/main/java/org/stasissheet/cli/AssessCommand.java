@@ -1,5 +1,7 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.CourseInputs;
+import org.stasissheet.load.Inputs;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;

@@ -1,5 +1,8 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.ToolVersion;
+import org.stasissheet.load.InvalidInputException;
+import org.stasissheet.load.Inputs;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;

@@ -1,5 +1,7 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.InvalidInputException;
+import org.stasissheet.load.Inputs;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;

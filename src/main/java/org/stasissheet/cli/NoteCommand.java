@@ -1,5 +1,6 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.Inputs;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;

@@ -1,5 +1,6 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.InvalidInputException;
 import java.nio.file.Path;
 import org.stasissheet.files.AtomicFiles;
 import org.stasissheet.files.FileWriteException;

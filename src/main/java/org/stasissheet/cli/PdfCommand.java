@@ -1,5 +1,7 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.InvalidInputException;
+import org.stasissheet.load.Inputs;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
 import java.util.concurrent.Callable;

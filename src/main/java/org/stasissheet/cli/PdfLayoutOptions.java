@@ -1,5 +1,6 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.ToolVersion;
 import org.stasissheet.report.Paper;
 import org.stasissheet.report.PdfOptions;
 import picocli.CommandLine.Option;

@@ -1,5 +1,7 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.load.ToolVersion;
+import org.stasissheet.load.InvalidInputException;
 import java.io.PrintWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;

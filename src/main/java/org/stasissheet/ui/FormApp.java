@@ -8,7 +8,7 @@ import org.stasissheet.files.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.cli.Inputs;
+import org.stasissheet.load.Inputs;
 import org.stasissheet.ui.draft.Autosaver;
 
 /**

@@ -27,7 +27,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.stasissheet.cli.Inputs;
+import org.stasissheet.load.Inputs;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.CaseReader;
 import org.stasissheet.report.PdfOptions;

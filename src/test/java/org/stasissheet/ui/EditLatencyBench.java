@@ -11,7 +11,7 @@ import javafx.application.Platform;
 import javafx.stage.Stage;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.cli.Inputs;
+import org.stasissheet.load.Inputs;
 import org.stasissheet.ui.entry.FieldModel;
 
 /**

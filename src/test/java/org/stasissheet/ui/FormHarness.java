@@ -22,7 +22,7 @@ public final class FormHarness {
 
     public static FormSettings settings(Path dataFolder, ScriptedShell shell) {
         return new FormSettings(dataFolder, stage -> shell, CLOCK, Duration.ofMillis(150), Duration.ofMillis(30),
-                org.stasissheet.cli.Inputs::ruleSet, FormSettings.DEFAULT_SAMPLE);
+                org.stasissheet.load.Inputs::ruleSet, FormSettings.DEFAULT_SAMPLE);
     }
 
     /** Opens a window on a fresh stage, on the JavaFX thread, and waits until it is up. */

@@ -14,7 +14,7 @@ import javafx.scene.control.TitledPane;
 import javafx.stage.Stage;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.MainWindow;
-import org.stasissheet.cli.Inputs;
+import org.stasissheet.load.Inputs;
 
 /**
  * Walks the form through the views shown in the README's screenshots, printing {@code STEP n name} before each

@@ -14,7 +14,7 @@ import org.stasissheet.rules.RuleSet;
  * how it loads rule sets. {@link #forUser(Path)} gives the real ones; tests replace the shell and the folder.
  *
  * @param rules      the shipped set for an empty folder, else the set in the folder; throws
- *                   {@link org.stasissheet.cli.InvalidInputException} naming every problem when refused
+ *                   {@link org.stasissheet.load.InvalidInputException} naming every problem when refused
  * @param demoSample the sample (file name under the packaged samples) shown when there is nothing to restore
  */
 public record FormSettings(Path dataFolder, Function<Stage, Shell> shell, Clock clock, Duration autosaveDelay,

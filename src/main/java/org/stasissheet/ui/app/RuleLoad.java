@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Function;
-import org.stasissheet.cli.InvalidInputException;
+import org.stasissheet.load.InvalidInputException;
 import org.stasissheet.rules.RuleSet;
 
 /**

@@ -33,7 +33,7 @@ import org.testfx.util.WaitForAsyncUtils;
 /** The worksheet side against the core: what the form shows is what {@code assess} says for the same case. */
 @ExtendWith(ApplicationExtension.class)
 class FormVerdictTest {
-    private static final RuleSet SHIPPED = org.stasissheet.cli.Inputs.ruleSet(Optional.empty());
+    private static final RuleSet SHIPPED = org.stasissheet.load.Inputs.ruleSet(Optional.empty());
 
     @TempDir
     Path data;

@@ -1,4 +1,4 @@
-package org.stasissheet.cli;
+package org.stasissheet.load;
 
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
@@ -7,7 +7,7 @@ import org.stasissheet.course.Course;
 import org.stasissheet.intake.Case;
 
 /** Picks one moment of a course for the commands that take a case ({@code assess --at}). */
-final class CourseInputs {
+public final class CourseInputs {
     private CourseInputs() {
     }
 
@@ -15,7 +15,7 @@ final class CourseInputs {
      * The case in a case file, or for a course the case of the assessment at or before {@code at} (the latest when
      * no time is given), with the course's tumor-lysis baseline. {@code --at} on a case file is refused, not ignored.
      */
-    static Case caseOf(Path file, Optional<OffsetDateTime> at, java.io.PrintWriter err) {
+    public static Case caseOf(Path file, Optional<OffsetDateTime> at, java.io.PrintWriter err) {
         byte[] json = Inputs.caseBytes(file, err);
         if (!Inputs.isCourse(json)) {
             if (at.isPresent()) {

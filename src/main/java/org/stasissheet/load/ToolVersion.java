@@ -1,4 +1,4 @@
-package org.stasissheet.cli;
+package org.stasissheet.load;
 
 /** The tool's version as stamped in the jar manifest at build time. */
 public final class ToolVersion {

@@ -1,4 +1,4 @@
-package org.stasissheet.cli;
+package org.stasissheet.load;
 
 import java.util.List;
 

@@ -1,4 +1,4 @@
-package org.stasissheet.cli;
+package org.stasissheet.load;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -31,8 +31,8 @@ public final class Inputs {
      * A case with the JSON it was read from: the bytes go into the PDF as the record, so they are the case file
      * itself (or, for a worksheet PDF, the case file embedded in it), read once.
      */
-    record LoadedCase(byte[] json, Case value, List<String> warnings) {
-        LoadedCase {
+    public record LoadedCase(byte[] json, Case value, List<String> warnings) {
+        public LoadedCase {
             Objects.requireNonNull(json, "json");
             Objects.requireNonNull(value, "value");
             json = json.clone();
@@ -49,18 +49,18 @@ public final class Inputs {
      * A case file (stasis-case/1 JSON) or a worksheet PDF (by its .pdf name or its %PDF start); warnings about a
      * read-back PDF go to {@code err} before anything else is printed.
      */
-    static Case readCase(Path file, java.io.PrintWriter err) {
+    public static Case readCase(Path file, java.io.PrintWriter err) {
         return parseCase(file, caseBytes(file, err));
     }
 
-    static LoadedCase loadCase(Path file) {
+    public static LoadedCase loadCase(Path file) {
         LoadedRecord record = loadRecord(file);
         return new LoadedCase(record.json(), parseCase(file, record.json()), record.warnings());
     }
 
     /** The JSON record of a case or course file, or the one embedded in a worksheet or course PDF, with warnings. */
-    record LoadedRecord(byte[] json, List<String> warnings) {
-        LoadedRecord {
+    public record LoadedRecord(byte[] json, List<String> warnings) {
+        public LoadedRecord {
             json = json.clone();
             warnings = List.copyOf(warnings);
         }
@@ -72,7 +72,7 @@ public final class Inputs {
     }
 
     /** Reads the record: a JSON file's bytes (1 MiB at most), or a PDF's embedded record through the checked read-back. */
-    static LoadedRecord loadRecord(Path file) {
+    public static LoadedRecord loadRecord(Path file) {
         byte[] bytes = readLimited(file, WorksheetPdfs.MAX_PDF_BYTES);
         if (!WorksheetPdfs.looksLikePdf(file, bytes)) {
             if (bytes.length > CaseReader.MAX_BYTES) {
@@ -91,7 +91,7 @@ public final class Inputs {
     }
 
     /** The record's bytes; its warnings (a read-back without a digest) go to {@code err}. */
-    static byte[] caseBytes(Path file, java.io.PrintWriter err) {
+    public static byte[] caseBytes(Path file, java.io.PrintWriter err) {
         LoadedRecord record = loadRecord(file);
         record.warnings().forEach(w -> err.println("warning: " + file + ": " + w));
         err.flush();
@@ -99,7 +99,7 @@ public final class Inputs {
     }
 
     /** The case in these bytes, or every problem with its path in the file. */
-    static Case parseCase(Path file, byte[] json) {
+    public static Case parseCase(Path file, byte[] json) {
         CaseReader.Result result = CaseReader.read(json);
         if (result instanceof CaseReader.Accepted accepted) {
             return accepted.c();
@@ -111,12 +111,12 @@ public final class Inputs {
     }
 
     /** Whether these case-or-course bytes are a course ({@code "format": "stasis-course/1"}). */
-    static boolean isCourse(byte[] json) {
+    public static boolean isCourse(byte[] json) {
         return CourseReader.claimsToBeCourse(json);
     }
 
     /** The course in these bytes (a course file's, or the one embedded in a course PDF), or every problem. */
-    static Course parseCourse(Path file, byte[] json) {
+    public static Course parseCourse(Path file, byte[] json) {
         CourseReader.Result result = CourseReader.read(json);
         if (result instanceof CourseReader.Accepted accepted) {
             return accepted.course();
@@ -141,7 +141,7 @@ public final class Inputs {
     }
 
     /** At most {@code limit} bytes of a regular file; anything else (a FIFO would block for ever) is not opened. */
-    static byte[] readLimited(Path file, int limit) {
+    public static byte[] readLimited(Path file, int limit) {
         if (Files.isDirectory(file)) {
             throw unreadable(file, "it is a folder, not a case file");
         }
