@@ -59,7 +59,7 @@ final class ExportCommand extends CommandGroup {
                 throw new InvalidInputException("--subject: '" + subject + "' is not a FHIR reference such as "
                         + "Patient/123");
             }
-            Inputs.LoadedCase loaded = Inputs.loadCase(caseFile);
+            Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, spec.commandLine().getErr());
             Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
             OffsetDateTime now = OffsetDateTime.now();
             byte[] pdf = WorksheetPdf.render(sheet, layout.options(), now, loaded.json());

@@ -39,8 +39,7 @@ final class PdfCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         refuseOverwritingInput();
-        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile);
-        loaded.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + caseFile + ": " + w));
+        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, spec.commandLine().getErr());
         Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
         byte[] pdf = WorksheetPdf.render(sheet, layout.options(), OffsetDateTime.now(), loaded.json());
         OutputFiles.write(output, pdf);

@@ -50,7 +50,7 @@ final class RegisterRuns {
                 "--procedure: \"" + procedureWord + "\" is not allowed; allowed: " + Procedure.codes()));
         Instant now = Instant.now();
         Instant receivedAt = received.map(r -> time("--received", r)).orElse(now);
-        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile);
+        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, cl.getErr());
         Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rulesDir));
         NewReferral referral = new NewReferral(receivedAt, from.strip(), location.strip(), procedure,
                 Snapshot.of(sheet, new String(loaded.json(), StandardCharsets.UTF_8)), actor(by), now);

@@ -58,6 +58,18 @@ public final class Inputs {
         return new LoadedCase(record.json(), parseCase(file, record.json()), record.warnings());
     }
 
+    /** As {@link #loadCase(Path)}, with the read-back warnings printed to {@code err} first. */
+    public static LoadedCase loadCase(Path file, java.io.PrintWriter err) {
+        LoadedCase loaded = loadCase(file);
+        warn(file, loaded.warnings(), err);
+        return loaded;
+    }
+
+    private static void warn(Path file, List<String> warnings, java.io.PrintWriter err) {
+        warnings.forEach(w -> err.println("warning: " + file + ": " + w));
+        err.flush();
+    }
+
     /** The JSON record of a case or course file, or the one embedded in a worksheet or course PDF, with warnings. */
     public record LoadedRecord(byte[] json, List<String> warnings) {
         public LoadedRecord {
@@ -93,8 +105,7 @@ public final class Inputs {
     /** The record's bytes; its warnings (a read-back without a digest) go to {@code err}. */
     public static byte[] caseBytes(Path file, java.io.PrintWriter err) {
         LoadedRecord record = loadRecord(file);
-        record.warnings().forEach(w -> err.println("warning: " + file + ": " + w));
-        err.flush();
+        warn(file, record.warnings(), err);
         return record.json();
     }
 

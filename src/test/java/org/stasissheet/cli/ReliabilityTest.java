@@ -385,6 +385,26 @@ class ReliabilityTest {
         }
 
         @Test
+        @DisplayName("every command that reads a case from a PDF without a digest says so before its output")
+        void missingDigestWarnedByEveryReader() throws IOException {
+            byte[] caseJson = Files.readAllBytes(IGM);
+            Path old = Files.write(tmp.resolve("old.pdf"), TinyPdf.withAttachment(WorksheetPdfs.ATTACHMENT_NAME,
+                    caseJson, ""));
+            String db = "jdbc:sqlite:" + tmp.resolve("register.sqlite");
+            List<String[]> commands = List.of(
+                    new String[] {"assess", old.toString()},
+                    new String[] {"note", old.toString()},
+                    new String[] {"pdf", old.toString(), "-o", tmp.resolve("again.pdf").toString()},
+                    new String[] {"export", "fhir", old.toString(), "-o", tmp.resolve("bundle.json").toString()},
+                    new String[] {"register", "add", old.toString(), "--db", db});
+            for (String[] command : commands) {
+                assertEquals(ExitCode.DONE, run(command), String.join(" ", command) + ": " + err);
+                assertTrue(err.toString().contains("warning: ") && err.toString().contains("records no SHA-256"),
+                        String.join(" ", command) + ": " + err);
+            }
+        }
+
+        @Test
         @DisplayName("malformed PDFs (encrypted, reference loops, bad decode parameters, bombs, truncated, deep) are"
                 + " exit 2 with one line each, never exit 1")
         void malformedPdfs() throws IOException {
