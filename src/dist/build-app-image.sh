@@ -91,7 +91,7 @@ if [ "$(uname -s)" = Linux ]; then
         "${bin}jpackage" --type deb --app-image "$image" --name "$name" --app-version "$version" \
             --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
             --vendor "Stasis Sheet contributors" --linux-package-name "$name" --linux-app-category science \
-            --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
+            --linux-package-deps libgtk-3-0 --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
         [ ! -f "$work/held/$name.jsa" ] || mv "$work/held/$name.jsa" "$image/lib/app/"
         echo "build-app-image: wrote $(ls "$dist"/*.deb)"
     else
