@@ -79,45 +79,69 @@ public final class FlowChartView {
         if (m.equals(was)) {
             return;
         }
-        if (was != null && sameShape(was, m)) {
+        boolean sameSeries = was != null && sameSeries(was, m);
+        if (!sameSeries) {
+            toggles.getChildren().clear();
+            for (FlowSeries s : m.series()) {
+                boolean on = shown.getOrDefault(s.id(), s.shownAtStart());
+                CheckBox box = new CheckBox(s.name());
+                box.setId("series-" + s.id());
+                box.setSelected(on);
+                box.setAccessibleText("Show the series " + s.name());
+                box.selectedProperty().addListener((o, before, now) -> {
+                    shown.put(s.id(), now);
+                    plot(current);
+                });
+                toggles.getChildren().add(box);
+            }
+        }
+        if (was == null || !was.missing().equals(m.missing()) || !was.notes().equals(m.notes())
+                || !was.caveats().equals(m.caveats())) {
+            notes.getChildren().clear();
+            m.missing().forEach(t -> notes.getChildren().add(note("not shown: " + t, "flow-missing")));
+            m.notes().forEach(t -> notes.getChildren().add(note(t, "flow-note")));
+            m.caveats().forEach(t -> notes.getChildren().add(note("CAVEAT: " + t, "flow-caveat")));
+        }
+        if (sameSeries) {
             moveCurves(m);
-            return;
+            showAssumptions(m);
+        } else {
+            plot(m);
         }
-        toggles.getChildren().clear();
-        for (FlowSeries s : m.series()) {
-            boolean on = shown.getOrDefault(s.id(), s.shownAtStart());
-            CheckBox box = new CheckBox(s.name());
-            box.setId("series-" + s.id());
-            box.setSelected(on);
-            box.setAccessibleText("Show the series " + s.name());
-            box.selectedProperty().addListener((o, before, now) -> {
-                shown.put(s.id(), now);
-                plot(current);
-            });
-            toggles.getChildren().add(box);
-        }
-        notes.getChildren().clear();
-        m.missing().forEach(t -> notes.getChildren().add(note("not shown: " + t, "flow-missing")));
-        m.notes().forEach(t -> notes.getChildren().add(note(t, "flow-note")));
-        m.caveats().forEach(t -> notes.getChildren().add(note("CAVEAT: " + t, "flow-caveat")));
-        plot(m);
     }
 
-    /** Same series (ids, names, number of points, assumptions) and the same texts: only the values moved. */
-    private static boolean sameShape(FlowChartModel a, FlowChartModel b) {
-        if (a.series().size() != b.series().size() || !a.missing().equals(b.missing())
-                || !a.notes().equals(b.notes()) || !a.caveats().equals(b.caveats())) {
+    /** The same series (ids, names, number of points, shown or not at start): only values and texts moved. */
+    private static boolean sameSeries(FlowChartModel a, FlowChartModel b) {
+        if (a.series().size() != b.series().size()) {
             return false;
         }
         for (int i = 0; i < a.series().size(); i++) {
             FlowSeries x = a.series().get(i);
             FlowSeries y = b.series().get(i);
             if (!x.id().equals(y.id()) || !x.name().equals(y.name()) || x.points().size() != y.points().size()
-                    || x.shownAtStart() != y.shownAtStart() || !x.assumptions().equals(y.assumptions())) {
+                    || x.shownAtStart() != y.shownAtStart()) {
                 return false;
             }
         }
         return true;
+    }
+
+    /** The assumptions of the series that are on, under the chart. */
+    private void showAssumptions(FlowChartModel m) {
+        List<String> texts = new java.util.ArrayList<>();
+        for (FlowSeries s : m.series()) {
+            if (isShown(s)) {
+                s.assumptions().forEach(a -> texts.add(s.name() + ": " + a));
+            }
+        }
+        List<Node> labels = assumptions.getChildren();
+        if (labels.size() == texts.size()) {
+            for (int i = 0; i < texts.size(); i++) {
+                ((Label) labels.get(i)).setText(texts.get(i));
+            }
+        } else {
+            assumptions.getChildren().setAll(texts.stream().map(t -> (Node) note(t, "flow-assumption")).toList());
+        }
     }
 
     /** Sets the new values into the plotted points, and the spoken text to match. */
@@ -140,7 +164,6 @@ public final class FlowChartView {
     private void plot(FlowChartModel m) {
         chart.getData().clear();
         plotted.clear();
-        assumptions.getChildren().clear();
         if (!m.series().isEmpty()) {
             XYChart.Series<Number, Number> reference = new XYChart.Series<>();
             reference.setName("Reference blood (1)");
@@ -152,7 +175,6 @@ public final class FlowChartView {
             if (!isShown(s)) {
                 continue;
             }
-            s.assumptions().forEach(a -> assumptions.getChildren().add(note(s.name() + ": " + a, "flow-assumption")));
             XYChart.Series<Number, Number> series = new XYChart.Series<>();
             series.setName(s.name());
             for (FlowPoint p : s.points()) {
@@ -161,6 +183,7 @@ public final class FlowChartView {
             chart.getData().add(series);
             plotted.put(s.id(), series);
         }
+        showAssumptions(m);
         chart.setAccessibleText(spoken(m));
     }
 

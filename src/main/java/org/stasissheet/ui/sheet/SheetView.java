@@ -107,8 +107,12 @@ public final class SheetView {
         blocking.setVisible(c.worksheet().isEmpty());
         blocking.setText(c.blocking().isEmpty() ? "NO WORKSHEET yet."
                 : "NO WORKSHEET: the case cannot be read.\n" + String.join("\n", c.blocking()));
-        if (was == null || !was.verdicts().equals(c.verdicts())) {
+        if (was == null || !sameCards(was.verdicts(), c.verdicts())) {
             verdicts.getChildren().setAll(c.verdicts().stream().map(SheetView::verdict).toList());
+        } else if (!was.verdicts().equals(c.verdicts())) {
+            for (int i = 0; i < c.verdicts().size(); i++) {
+                refill((VBox) verdicts.getChildren().get(i), c.verdicts().get(i));
+            }
         }
         if (was == null || was.worksheet().isPresent() != c.worksheet().isPresent()
                 || !was.flagGroups().equals(c.flagGroups())) {
@@ -154,6 +158,31 @@ public final class SheetView {
         return lines.stream().flatMap(e -> java.util.stream.Stream.of(e.plasmaVolumes(), e.volume(),
                 e.intravascularLeft(), e.paraproteinImmediate(), e.paraproteinAfterRedistribution(),
                 e.viscosityImmediate(), e.viscosityAfterRedistribution())).toList();
+    }
+
+    /** Cards with the same ids and the same number of lines can take each other's texts in place. */
+    private static boolean sameCards(List<SheetContent.VerdictCard> a, List<SheetContent.VerdictCard> b) {
+        if (a.size() != b.size()) {
+            return false;
+        }
+        for (int i = 0; i < a.size(); i++) {
+            if (!a.get(i).id().equals(b.get(i).id()) || a.get(i).lines().size() != b.get(i).lines().size()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Puts a card's texts into the nodes {@link #verdict} made for a card of the same shape. */
+    private static void refill(VBox card, SheetContent.VerdictCard v) {
+        List<Node> labels = card.getChildren();
+        ((Label) labels.get(0)).setText(v.title());
+        ((Label) labels.get(1)).setText((v.raised() ? "● " : "○ ") + v.word());
+        for (int i = 0; i < v.lines().size(); i++) {
+            ((Label) labels.get(2 + i)).setText(v.lines().get(i));
+        }
+        card.pseudoClassStateChanged(RAISED, v.raised());
+        card.setAccessibleText(v.title() + ": " + v.word());
     }
 
     private static Node verdict(SheetContent.VerdictCard v) {
