@@ -19,7 +19,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * {@code assess CASE [--json]} runs without the command-line library's model ({@link QuickPath}); it must print,
+ * {@code assess CASE [--json]} and {@code pdf CASE -o OUT} run without the command-line library's model ({@link QuickPath}); it must print,
  * warn and exit exactly as the full command line does. The full way is forced with {@code --}, which the library
  * reads as "only positional arguments follow" and the quick path never takes.
  */
@@ -74,10 +74,45 @@ class QuickPathTest {
         assertTrue(ok.out().contains("Decision support only"), ok.out());
     }
 
+    @Test
+    @DisplayName("pdf CASE -o OUT: the same messages, exit code and file written as the full command line")
+    void pdfSameAsFullCommandLine(@TempDir Path temp) throws IOException {
+        Files.createDirectories(temp.resolve("in"));
+        List<String> files = new ArrayList<>(inputs(temp.resolve("in")));
+        files.add("samples/igm-symptomatic.json|same");
+        int written = 0;
+        for (String entry : files) {
+            String file = entry.replace("|same", "");
+            Path out = entry.endsWith("|same") ? Path.of(file) : temp.resolve("out.pdf");
+            assertTrue(QuickPath.recognise(new String[] {"pdf", file, "-o", out.toString()}).isPresent(), file);
+            Files.deleteIfExists(temp.resolve("out.pdf"));
+            Run quick = run("pdf", file, "-o", out.toString());
+            boolean quickWrote = Files.isRegularFile(temp.resolve("out.pdf"));
+            Files.deleteIfExists(temp.resolve("out.pdf"));
+            Run full = run("pdf", "-o", out.toString(), "--", file);
+            boolean fullWrote = Files.isRegularFile(temp.resolve("out.pdf"));
+            assertEquals(full, quick, file);
+            assertEquals(fullWrote, quickWrote, file);
+            if (quickWrote) {
+                assertEquals("%PDF-", new String(Files.readAllBytes(temp.resolve("out.pdf")), 0, 5,
+                        StandardCharsets.ISO_8859_1), file);
+                written++;
+            }
+        }
+        assertTrue(written >= 4, "the demo cases were written: " + written);
+        assertEquals(run("pdf", "-o", temp.resolve("b.pdf").toString(), "--", "samples/cll-extreme.json"),
+                run("pdf", "--output", temp.resolve("b.pdf").toString(), "samples/cll-extreme.json"));
+        assertTrue(QuickPath.recognise(new String[] {"pdf", "samples/igm-symptomatic.json", "-o",
+                "samples/igm-symptomatic.json"}).isPresent(), "refusing to overwrite the input is the command's own");
+        assertTrue(Files.readString(Path.of("samples/igm-symptomatic.json")).startsWith("{"), "input untouched");
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"assess", "assess|-h", "assess|--help", "assess|x.json|--rules|r", "assess|--at|2026-01-01T00:00Z|x",
             "assess|@args.txt", "assess|-", "assess|--|x.json", "assess|x.json|y.json", "assess|--json|--json|x.json",
-            "assess|--JSON|x.json", "pdf|x.json", "assess|x.json|--json|extra", "--version", "assess|"})
+            "assess|--JSON|x.json", "pdf|x.json", "assess|x.json|--json|extra", "--version", "assess|", "pdf|x.json|-oout.pdf",
+            "pdf|x.json|--output=o.pdf", "pdf|x.json|-o|o.pdf|--paper", "pdf|x.json|--no-identifiers|o.pdf",
+            "pdf|-o|o.pdf|-x", "pdf|x.json|-o|-", "pdf|x.json|-o|@o", "pdf|x.json|y.json|o.pdf", "pdf|-o|-o|x"})
     @DisplayName("anything but assess CASE [--json] goes the full way")
     void recognisesOnlyThePlainForm(String joined) {
         String[] args = joined.split("\\|", -1);
@@ -93,5 +128,11 @@ class QuickPathTest {
                 QuickPath.recognise(new String[] {"assess", "x.json", "--json"}).orElseThrow());
         assertEquals(new QuickPath.Assess(Path.of("x.json"), true),
                 QuickPath.recognise(new String[] {"assess", "--json", "x.json"}).orElseThrow());
+        assertEquals(new QuickPath.Pdf(Path.of("x.json"), Path.of("o.pdf")),
+                QuickPath.recognise(new String[] {"pdf", "x.json", "-o", "o.pdf"}).orElseThrow());
+        assertEquals(new QuickPath.Pdf(Path.of("x.json"), Path.of("o.pdf")),
+                QuickPath.recognise(new String[] {"pdf", "-o", "o.pdf", "x.json"}).orElseThrow());
+        assertEquals(new QuickPath.Pdf(Path.of("x.json"), Path.of("o.pdf")),
+                QuickPath.recognise(new String[] {"pdf", "x.json", "--output", "o.pdf"}).orElseThrow());
     }
 }
