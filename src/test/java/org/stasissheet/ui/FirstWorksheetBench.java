@@ -60,7 +60,8 @@ public final class FirstWorksheetBench {
                     if (p.getLayoutBounds().getHeight() > 0) {
                         System.out.println(System.currentTimeMillis() - t0);
                         System.out.flush();
-                        Runtime.getRuntime().halt(0);
+                        // exit from a thread of its own: shutdown hooks may need this (the FX) thread
+                        new Thread(() -> System.exit(0), "first-worksheet-exit").start();
                     }
                 });
                 Platform.requestNextPulse();
