@@ -10,7 +10,8 @@
 #     are reached only by name at run time) and the JavaFX modules, taken from the platform jars in target/lib
 #     (javafx-base/graphics/controls-VERSION-PLATFORM.jar); its base class-data archive is made by jlink;
 #   - stasis-sheet.jar and every other runtime library from target/lib (not the JavaFX jars: they are in the runtime);
-#   - the launcher options of src/main/dist/stasis-sheet (quick compiler, serial collector) and an application
+#   - bin/stasis-sheet from src/dist/app/launcher.sh: the options of src/main/dist/stasis-sheet (quick compiler,
+#     serial collector) on the image's own runtime, and an application
 #     class-data archive made in place by lib/app/make-archive.sh (one `pdf` of a demo case); the .deb makes its
 #     own after installing, since an archive is valid only where it was made.
 # Decision support only: it supports, and never replaces, clinical judgement, local protocols and licensed practice.
@@ -65,19 +66,23 @@ echo "build-app-image: linking the runtime ($modules)"
 "${bin}jlink" --module-path "$fx_path" --add-modules "$modules" \
     --strip-debug --no-header-files --no-man-pages --generate-cds-archive --output "$work/runtime" >/dev/null
 
-# Options as in src/main/dist/stasis-sheet. The application class-data archive is made afterwards, in place, by
-# lib/app/make-archive.sh; until it exists (or when the JVM refuses it) -Xshare:auto runs without it, quietly.
+# jpackage lays out the image; its native launcher is then replaced by src/dist/app/launcher.sh (the native one
+# asks rpm and dpkg which package owns it at every start), with the class path written in, relative to the image.
 echo "build-app-image: packaging the application image"
 "${bin}jpackage" --type app-image --name "$name" --app-version "$version" \
     --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
     --vendor "Stasis Sheet contributors" \
     --input "$work/input" --main-jar "$name.jar" --main-class org.stasissheet.Main \
-    --runtime-image "$work/runtime" \
-    --java-options '-XX:TieredStopAtLevel=1' --java-options '-XX:+UseSerialGC' \
-    --java-options '-Xshare:auto' --java-options '-XX:SharedArchiveFile=$APPDIR/'"$name"'.jsa' \
-    --java-options '-Xlog:cds=off' --java-options '-Xlog:cds+dynamic=off' \
-    --dest "$dist"
-[ -x "$image/bin/$name" ] && [ -f "$image/lib/app/$name.cfg" ] || die "jpackage wrote no launcher in $image/bin"
+    --runtime-image "$work/runtime" --dest "$dist"
+cfg="$image/lib/app/$name.cfg"
+[ -x "$image/bin/$name" ] && [ -f "$cfg" ] || die "jpackage wrote no launcher in $image/bin"
+classpath=$(sed -n 's/^app\.classpath=//p' "$cfg" | sed 's#^\$APPDIR#$app#' | paste -sd: -)
+[ -n "$classpath" ] || die "no class path in $cfg"
+sed "s#@CLASSPATH@#$classpath#" "$root/src/dist/app/launcher.sh" > "$work/launcher"
+grep -q '@CLASSPATH@' "$work/launcher" && die "the class path was not written into the launcher"
+rm -f "$image/bin/$name"
+cp "$work/launcher" "$image/bin/$name"
+chmod 755 "$image/bin/$name" "$image/lib/app/make-archive.sh"
 sh "$image/lib/app/make-archive.sh" || echo "build-app-image: the image has no class-data archive" >&2
 echo "build-app-image: wrote $image ($(du -sh "$image" | cut -f1))"
 
