@@ -31,13 +31,17 @@ trap 'rm -rf "$work"' EXIT INT TERM
 (cd "$root/target/bench-classes" && "$jar" cf "$work/probe.jar" org/stasissheet/bench/PdfStackFloor.class) || exit 1
 floor_opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto -XX:SharedArchiveFile=$archive -Xlog:cds=off -Xlog:cds+dynamic=off"
 
-names="bare assess floor pdf"
+# assess-full and pdf-full: the same commands through the whole command-line library (`--` keeps them off the quick
+# path, cli.QuickPath), to show in the same run what the quick path saves
+names="bare assess assess-full floor pdf pdf-full"
 [ -x "$image" ] && names="$names image-assess image-pdf"
 run_one() {
     case "$1" in
         bare) time_ms "$java" -version ;;
         assess) time_ms "$launcher" assess "$demo" ;;
+        assess-full) time_ms "$launcher" assess -- "$demo" ;;
         pdf) time_ms "$launcher" pdf "$demo" -o "$work/one.pdf" ;;
+        pdf-full) time_ms "$launcher" pdf -o "$work/one.pdf" -- "$demo" ;;
         # shellcheck disable=SC2086
         floor) time_ms "$java" $floor_opts -cp "$root/target/stasis-sheet.jar:$work/probe.jar" \
             org.stasissheet.bench.PdfStackFloor "$work/floor.pdf" ;;
@@ -70,6 +74,7 @@ bare=$(median_of "$work/bare")
 floor=$(median_of "$work/floor")
 echo "assess / java -version        $(ratio_of "$(median_of "$work/assess")" "$bare")   (target <= 2.5)"
 echo "pdf / stack floor             $(ratio_of "$(median_of "$work/pdf")" "$floor")   (target <= 1.5)"
+echo "without the quick path:        assess $(ratio_of "$(median_of "$work/assess-full")" "$bare") x java -version, pdf $(ratio_of "$(median_of "$work/pdf-full")" "$floor") x the floor"
 if [ -x "$image" ]; then
     echo "image assess / java -version  $(ratio_of "$(median_of "$work/image-assess")" "$bare")"
     echo "image pdf / stack floor       $(ratio_of "$(median_of "$work/image-pdf")" "$floor")"
