@@ -7,8 +7,8 @@
 #   sh src/bench/first-worksheet.sh [RUNS]      (default 10; each run a fresh JVM and a fresh data folder)
 #
 # Display: an Xvfb server of its own when Xvfb is installed (the real GTK glass; apt-get install xvfb), else
-# Monocle headless from the test class path. Options as the launcher gives the form: the default compilers and
-# target/stasis-sheet.jsa when present. Every run is interleaved with a `java -version`, so the load the machine
+# Monocle headless from the test class path. Options as the launcher gives the form: the quick compiler only,
+# the serial collector and target/stasis-sheet.jsa when present. Every run is interleaved with a `java -version`, so the load the machine
 # was under shows in the same table. JAVA_HOME picks the runtime.
 set -u
 root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
@@ -28,7 +28,7 @@ trap cleanup EXIT INT TERM
 # stays usable: its class path is a prefix of this one)
 (cd "$root/target/test-classes" && "$jar" cf "$work/bench.jar" org/stasissheet/ui/FirstWorksheetBench*.class) || exit 1
 cp="$root/target/stasis-sheet.jar:$work/bench.jar"
-opts="-Xshare:auto"
+opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto"
 if [ -f "$root/target/stasis-sheet.jsa" ]; then
     opts="$opts -XX:SharedArchiveFile=$root/target/stasis-sheet.jsa -Xlog:cds=off -Xlog:cds+dynamic=off"
     archive="target/stasis-sheet.jsa (trained on a pdf)"
