@@ -1,6 +1,6 @@
 #!/bin/sh
 # Builds the installable application: target/dist/stasis-sheet/ (bin/stasis-sheet runs it, no JDK or Maven needed)
-# and, on Linux with dpkg-deb and fakeroot present, target/dist/stasis-sheet_VERSION_ARCH.deb.
+# and, with dpkg-deb and fakeroot present, target/dist/stasis-sheet_VERSION-1_ARCH.deb. Linux only so far.
 #
 #   mvn -Pdist package        (calls this script after the jar and target/lib are built, then check-app-image.sh)
 #   sh src/dist/build-app-image.sh VERSION    (by hand, after `mvn -q package -DskipTests`)
@@ -25,6 +25,10 @@ work="$target/dist-work"
 image="$dist/$name"
 
 die() { echo "build-app-image: $*" >&2; exit 1; }
+
+# The launcher, the archive and the check are written for the Linux layout of an image (bin/, lib/app/, lib/runtime/);
+# macOS and Windows lay theirs out differently and have not been tried.
+[ "$(uname -s)" = Linux ] || die "the application image is built and checked on Linux only so far (this is $(uname -s))"
 
 # jpackage and jlink of the JDK that runs the build (JAVA_HOME when set)
 if [ -n "${JAVA_HOME:-}" ] && [ -x "$JAVA_HOME/bin/jpackage" ]; then bin="$JAVA_HOME/bin/"; else bin=""; fi
@@ -87,19 +91,17 @@ sh "$image/lib/app/make-archive.sh" || echo "build-app-image: the image has no c
 echo "build-app-image: wrote $image ($(du -sh "$image" | cut -f1))"
 
 # The Debian package, only where it can be built; its absence is not an error.
-if [ "$(uname -s)" = Linux ]; then
-    if command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1; then
-        # the archive made here is valid only here: the package's post-install makes its own under /opt
-        echo "build-app-image: building the .deb"
-        mkdir "$work/held"
-        [ ! -f "$image/lib/app/$name.jsa" ] || mv "$image/lib/app/$name.jsa" "$work/held/"
-        "${bin}jpackage" --type deb --app-image "$image" --name "$name" --app-version "$version" \
-            --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
-            --vendor "Stasis Sheet contributors" --linux-package-name "$name" --linux-app-category science \
-            --linux-package-deps libgtk-3-0 --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
-        [ ! -f "$work/held/$name.jsa" ] || mv "$work/held/$name.jsa" "$image/lib/app/"
-        echo "build-app-image: wrote $(ls "$dist"/*.deb)"
-    else
-        echo "build-app-image: no .deb (dpkg-deb or fakeroot is not installed); the application image is complete"
-    fi
+if command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1; then
+    # the archive made here is valid only here: the package's post-install makes its own under /opt
+    echo "build-app-image: building the .deb"
+    mkdir "$work/held"
+    [ ! -f "$image/lib/app/$name.jsa" ] || mv "$image/lib/app/$name.jsa" "$work/held/"
+    "${bin}jpackage" --type deb --app-image "$image" --name "$name" --app-version "$version" \
+        --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
+        --vendor "Stasis Sheet contributors" --linux-package-name "$name" --linux-app-category science \
+        --linux-package-deps libgtk-3-0 --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
+    [ ! -f "$work/held/$name.jsa" ] || mv "$work/held/$name.jsa" "$image/lib/app/"
+    echo "build-app-image: wrote $(ls "$dist"/*.deb)"
+else
+    echo "build-app-image: no .deb (dpkg-deb or fakeroot is not installed); the application image is complete"
 fi
