@@ -12,7 +12,7 @@ demo=$(ls "$root"/samples/*.json | head -n 1)
 failed=0
 
 check() {  # check NAME: the JSON worksheet must equal the reference, and the run must exit 0
-    out=$("$work/stasis" assess --json "$demo" 2>"$work/err"); code=$?
+    out=$("$work/stasis-sheet" assess --json "$demo" 2>"$work/err"); code=$?
     if [ $code -ne 0 ] || [ "$out" != "$reference" ]; then
         echo "FAIL $1: exit $code"; head -n 3 "$work/err"; failed=1
     else
@@ -21,19 +21,19 @@ check() {  # check NAME: the JSON worksheet must equal the reference, and the ru
 }
 
 rm -f "$work/stasis-sheet.jsa" "$work/stasis-sheet.jsa.size"
-reference=$("$work/stasis" assess --json "$demo") || { echo "FAIL: no reference output"; exit 1; }
+reference=$("$work/stasis-sheet" assess --json "$demo") || { echo "FAIL: no reference output"; exit 1; }
 check "no archive"
-"$work/stasis" --make-archive assess "$demo" >/dev/null || { echo "FAIL: --make-archive"; exit 1; }
+"$work/stasis-sheet" --make-archive assess "$demo" >/dev/null || { echo "FAIL: --make-archive"; exit 1; }
 check "fresh archive"
 sleep 1; touch "$work/stasis-sheet.jar"
 check "archive older than the jar"
-"$work/stasis" --make-archive assess "$demo" >/dev/null
+"$work/stasis-sheet" --make-archive assess "$demo" >/dev/null
 # a half-written archive (an interrupted --make-archive by hand): the JVM itself would crash on it
 chmod u+w "$work/stasis-sheet.jsa"
 head -c 100000 "$work/stasis-sheet.jsa" > "$work/partial" && mv -f "$work/partial" "$work/stasis-sheet.jsa"
 check "truncated archive"
 printf 'not an archive at all' > "$work/stasis-sheet.jsa"; wc -c < "$work/stasis-sheet.jsa" | tr -d ' ' > "$work/stasis-sheet.jsa.size"
 check "garbage archive of the recorded size"
-rm -f "$work/stasis-sheet.jsa.size"; "$work/stasis" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis-sheet.jsa.size"
+rm -f "$work/stasis-sheet.jsa.size"; "$work/stasis-sheet" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis-sheet.jsa.size"
 check "archive without its size record"
 exit $failed

@@ -2,7 +2,8 @@
 rem Stasis Sheet launcher (Windows). Runs stasis-sheet.jar, which sits beside this script, with the start-up
 rem options that measured as worth it (src\bench\RESULTS.md): the quick C1 compiler only, the serial collector
 rem and the class-data archive stasis-sheet.jsa when it is present (the JVM's own checks refuse a stale one
-rem quietly). Without arguments the form opens with the JVM's default settings.
+rem quietly). Without arguments the form opens, with the same options (src\bench\RESULTS.md: the quick compiler
+rem shows the first worksheet sooner and keeps edits well within their target).
 rem   stasis-sheet --make-archive COMMAND ARGS...   (re)build stasis-sheet.jsa by running COMMAND once, e.g.
 rem   stasis-sheet --make-archive pdf samples\igm-symptomatic.json -o %TEMP%\training.pdf
 rem JAVA_HOME picks the Java runtime; STASIS_JAVA_OPTS adds JVM options.
@@ -29,7 +30,7 @@ if "%~1"=="" goto form
 exit /b %ERRORLEVEL%
 
 :form
-"%JAVA%" -Xshare:auto %SHARE% %STASIS_JAVA_OPTS% -jar "%JAR%"
+"%JAVA%" %FAST% -Xshare:auto %SHARE% %STASIS_JAVA_OPTS% -jar "%JAR%"
 exit /b %ERRORLEVEL%
 
 :no_jar

@@ -41,9 +41,14 @@ final class AssessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Worksheet sheet = Assessor.assess(CourseInputs.caseOf(caseFile, Optional.ofNullable(at),
-                spec.commandLine().getErr()), Inputs.ruleSet(rules.dir()));
-        PrintWriter out = spec.commandLine().getOut();
+        return print(caseFile, json, Optional.ofNullable(at), rules.dir(), spec.commandLine().getOut(),
+                spec.commandLine().getErr());
+    }
+
+    /** The command's work, shared with {@link QuickPath}: read, assess, print. */
+    static int print(Path caseFile, boolean json, Optional<OffsetDateTime> at, Optional<Path> rulesDir,
+                     PrintWriter out, PrintWriter err) {
+        Worksheet sheet = Assessor.assess(CourseInputs.caseOf(caseFile, at, err), Inputs.ruleSet(rulesDir));
         out.print(json ? WorksheetJson.render(sheet) : WorksheetText.render(sheet));
         out.flush();
         return ExitCode.DONE;

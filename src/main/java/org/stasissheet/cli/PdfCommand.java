@@ -2,8 +2,10 @@ package org.stasissheet.cli;
 
 import org.stasissheet.load.InvalidInputException;
 import org.stasissheet.load.Inputs;
+import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.stasissheet.report.Paper;
 import org.stasissheet.report.PdfOptions;
@@ -38,18 +40,25 @@ final class PdfCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        refuseOverwritingInput();
-        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, spec.commandLine().getErr());
-        Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
-        byte[] pdf = WorksheetPdf.render(sheet, layout.options(), OffsetDateTime.now(), loaded.json());
+        return write(caseFile, output, layout.options(), rules.dir(), spec.commandLine().getOut(),
+                spec.commandLine().getErr());
+    }
+
+    /** The command's work, shared with {@link QuickPath}: read, assess, render, write atomically. */
+    static int write(Path caseFile, Path output, PdfOptions options, Optional<Path> rulesDir, PrintWriter out,
+                     PrintWriter err) {
+        refuseOverwritingInput(caseFile, output);
+        Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, err);
+        Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rulesDir));
+        byte[] pdf = WorksheetPdf.render(sheet, options, OffsetDateTime.now(), loaded.json());
         OutputFiles.write(output, pdf);
-        spec.commandLine().getOut().println("wrote " + output);
-        spec.commandLine().getOut().flush();
+        out.println("wrote " + output);
+        out.flush();
         return ExitCode.DONE;
     }
 
     /** Writing over the case being read would destroy the only copy of it (and, without identifiers, its label). */
-    private void refuseOverwritingInput() {
+    private static void refuseOverwritingInput(Path caseFile, Path output) {
         if (OutputFiles.sameFile(caseFile, output)) {
             throw new InvalidInputException(output + ": this is the input file; choose another output path (the"
                     + " case file is never overwritten)");

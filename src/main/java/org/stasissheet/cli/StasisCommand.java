@@ -34,6 +34,10 @@ public final class StasisCommand implements Runnable {
     public static int run(String[] args, PrintWriter rawOut, PrintWriter rawErr) {
         PrintWriter out = Terminal.safe(rawOut);
         PrintWriter err = Terminal.safe(rawErr);
+        java.util.Optional<QuickPath.Run> quick = QuickPath.recognise(args);
+        if (quick.isPresent()) {
+            return QuickPath.run(quick.get(), out, err);
+        }
         CommandLine cl = new CommandLine(new StasisCommand());
         ownWords(cl);
         cl.setOut(out);

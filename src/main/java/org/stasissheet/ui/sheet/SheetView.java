@@ -23,6 +23,10 @@ import org.stasissheet.worksheet.Cautions;
  * The worksheet side: rule-set badge, notices, the three verdicts, the flags grouped by level (each one
  * expands to its explanation, source and basis), the flow chart, the apheresis numbers, the inputs as read, and
  * the standing cautions. It lays out {@link SheetContent} and computes nothing.
+ *
+ * <p>An edit usually changes a few numbers, so a section is rebuilt only when its content changed, and a table
+ * whose shape stayed the same gets its texts replaced in place: new nodes cost CSS and layout, a new text only
+ * layout (src/bench/edit-latency.sh measures it). An expanded flag stays expanded while its section is unchanged.
  */
 public final class SheetView {
     private static final PseudoClass RAISED = PseudoClass.getPseudoClass("raised");
@@ -39,6 +43,11 @@ public final class SheetView {
     private final GridPane inputs = new GridPane();
     /** Held so the chart (and the binding feeding it) lives as long as this view. */
     private final FlowChartView chart;
+    /** What is on screen; null before the first content. */
+    private SheetContent showing;
+    private GridPane volumeGrid;
+    private GridPane exchangeGrid;
+    private GridPane leukaGrid;
 
     public SheetView(SheetViewModel model) {
         Objects.requireNonNull(model, "model");
@@ -82,10 +91,15 @@ public final class SheetView {
     }
 
     private void show(SheetContent c) {
+        SheetContent was = showing;
+        showing = c;
         badge.setText(c.ruleSetBadge());
-        // the hash is provenance, not a sentence: it stays one hover away
-        badge.setTooltip(c.worksheet().map(w -> new javafx.scene.control.Tooltip("SHA-256 "
-                + w.ruleSet().sha256())).orElse(null));
+        if (was == null || !was.worksheet().map(w -> w.ruleSet().sha256())
+                .equals(c.worksheet().map(w -> w.ruleSet().sha256()))) {
+            // the hash is provenance, not a sentence: it stays one hover away
+            badge.setTooltip(c.worksheet().map(w -> new javafx.scene.control.Tooltip("SHA-256 "
+                    + w.ruleSet().sha256())).orElse(null));
+        }
         local.setVisible(c.localProtocol());
         leftOut.setVisible(!c.leftOut().isEmpty());
         leftOut.setText("INCOMPLETE: this worksheet leaves out " + String.join(", ", c.leftOut())
@@ -93,14 +107,82 @@ public final class SheetView {
         blocking.setVisible(c.worksheet().isEmpty());
         blocking.setText(c.blocking().isEmpty() ? "NO WORKSHEET yet."
                 : "NO WORKSHEET: the case cannot be read.\n" + String.join("\n", c.blocking()));
-        verdicts.getChildren().setAll(c.verdicts().stream().map(SheetView::verdict).toList());
-        showFlags(c);
-        showApheresis(c);
-        inputs.getChildren().clear();
-        int row = 0;
-        for (SheetContent.Row r : c.inputs()) {
-            inputs.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
+        if (was == null || !sameCards(was.verdicts(), c.verdicts())) {
+            verdicts.getChildren().setAll(c.verdicts().stream().map(SheetView::verdict).toList());
+        } else if (!was.verdicts().equals(c.verdicts())) {
+            for (int i = 0; i < c.verdicts().size(); i++) {
+                refill((VBox) verdicts.getChildren().get(i), c.verdicts().get(i));
+            }
         }
+        if (was == null || was.worksheet().isPresent() != c.worksheet().isPresent()
+                || !was.flagGroups().equals(c.flagGroups())) {
+            showFlags(c);
+        }
+        if (was == null || was.worksheet().isPresent() != c.worksheet().isPresent()
+                || was.volumes().size() != c.volumes().size() || was.exchanges().size() != c.exchanges().size()
+                || was.leukapheresis().size() != c.leukapheresis().size()
+                || !was.apheresisNotes().equals(c.apheresisNotes())) {
+            showApheresis(c);
+        } else {
+            relabel(volumeGrid, 0, rowTexts(c.volumes()));
+            relabel(exchangeGrid, 7, exchangeTexts(c.exchanges()));
+            relabel(leukaGrid, 0, rowTexts(c.leukapheresis()));
+        }
+        if (was == null || was.inputs().size() != c.inputs().size()) {
+            inputs.getChildren().clear();
+            int row = 0;
+            for (SheetContent.Row r : c.inputs()) {
+                inputs.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
+            }
+        } else {
+            relabel(inputs, 0, rowTexts(c.inputs()));
+        }
+    }
+
+    /** Sets the texts of a table whose shape did not change, skipping its first {@code skip} cells (headings). */
+    private static void relabel(GridPane grid, int skip, List<String> texts) {
+        if (grid == null) {
+            return;
+        }
+        List<Node> cells = grid.getChildren();
+        for (int i = 0; i < texts.size() && skip + i < cells.size(); i++) {
+            ((Label) cells.get(skip + i)).setText(texts.get(i));
+        }
+    }
+
+    private static List<String> rowTexts(List<SheetContent.Row> rows) {
+        return rows.stream().flatMap(r -> java.util.stream.Stream.of(r.label(), r.value())).toList();
+    }
+
+    private static List<String> exchangeTexts(List<SheetContent.ExchangeLine> lines) {
+        return lines.stream().flatMap(e -> java.util.stream.Stream.of(e.plasmaVolumes(), e.volume(),
+                e.intravascularLeft(), e.paraproteinImmediate(), e.paraproteinAfterRedistribution(),
+                e.viscosityImmediate(), e.viscosityAfterRedistribution())).toList();
+    }
+
+    /** Cards with the same ids and the same number of lines can take each other's texts in place. */
+    private static boolean sameCards(List<SheetContent.VerdictCard> a, List<SheetContent.VerdictCard> b) {
+        if (a.size() != b.size()) {
+            return false;
+        }
+        for (int i = 0; i < a.size(); i++) {
+            if (!a.get(i).id().equals(b.get(i).id()) || a.get(i).lines().size() != b.get(i).lines().size()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Puts a card's texts into the nodes {@link #verdict} made for a card of the same shape. */
+    private static void refill(VBox card, SheetContent.VerdictCard v) {
+        List<Node> labels = card.getChildren();
+        ((Label) labels.get(0)).setText(v.title());
+        ((Label) labels.get(1)).setText((v.raised() ? "● " : "○ ") + v.word());
+        for (int i = 0; i < v.lines().size(); i++) {
+            ((Label) labels.get(2 + i)).setText(v.lines().get(i));
+        }
+        card.pseudoClassStateChanged(RAISED, v.raised());
+        card.setAccessibleText(v.title() + ": " + v.word());
     }
 
     private static Node verdict(SheetContent.VerdictCard v) {
@@ -172,6 +254,9 @@ public final class SheetView {
 
     private void showApheresis(SheetContent c) {
         apheresis.getChildren().clear();
+        volumeGrid = null;
+        exchangeGrid = null;
+        leukaGrid = null;
         if (c.worksheet().isEmpty()) {
             return;
         }
@@ -209,6 +294,9 @@ public final class SheetView {
         apheresis.getChildren().addAll(volumes, subheading("Plasma exchange: right after and after redistribution"),
                 exchange, subheading("Leukapheresis"), leuka);
         c.apheresisNotes().forEach(n -> apheresis.getChildren().add(cell("NOTE: " + n, "apheresis-note")));
+        volumeGrid = volumes;
+        exchangeGrid = exchange;
+        leukaGrid = leuka;
     }
 
     private static GridPane grid(String id) {
