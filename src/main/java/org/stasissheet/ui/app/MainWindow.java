@@ -255,7 +255,9 @@ public final class MainWindow {
                 () -> actions.updatePreferences(preferences.get().withTextScale(preferences.get().textScale() - 0.1)));
         MenuItem normal = item("System text size", "Shortcut+DIGIT0", "text-normal",
                 () -> actions.updatePreferences(preferences.get().withTextScale(1)));
-        view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal);
+        MenuItem assessor = item("_Assessor for new cases…", null, "action-assessor", actions::chooseAssessor);
+        view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal, new SeparatorMenuItem(),
+                assessor);
 
         Menu register = new Menu("Re_gister");
         register.setId("menu-register");
