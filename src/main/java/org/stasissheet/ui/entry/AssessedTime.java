@@ -55,7 +55,7 @@ public final class AssessedTime {
 
     /** The current time, to the minute, as the case file records it. */
     public static String now(java.time.Clock clock) {
-        return OffsetDateTime.now(clock).truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME);
+        return OffsetDateTime.now(clock).truncatedTo(ChronoUnit.MINUTES).toString();
     }
 
     /**
@@ -86,7 +86,8 @@ public final class AssessedTime {
                     + " did not happen in time zone " + zone.getId() + " (the clocks went forward); check the time");
         }
         // the hour the clocks go back happens twice: the first is recorded, and twiceNote says so
-        return new Written(OffsetDateTime.of(local, offsets.get(0)).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME), "");
+        // ISO 8601 as java.time writes it: seconds only when there are some (02:40+01:00, 02:40:30+01:00)
+        return new Written(OffsetDateTime.of(local, offsets.get(0)).toString(), "");
     }
 
     /**

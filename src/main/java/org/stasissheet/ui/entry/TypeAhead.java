@@ -13,7 +13,8 @@ import javafx.scene.input.KeyEvent;
  * Letters typed on a focused picker choose the first choice whose words start with them: "m" picks male, "ma"
  * typed quickly the first choice starting with "ma". A pause longer than {@link #PAUSE_MILLIS} starts a new
  * prefix. A choice whose words are exactly the prefix wins over a longer one ("no" picks "no", not "not
- * assessed"). Typing only chooses; it never opens the list or moves focus (Enter does that).
+ * assessed"). Letters that no choice starts with start a new prefix with the last letter ("m" then "f" quickly picks
+ * female). Typing only chooses; it never opens the list or moves focus (Enter does that).
  */
 public final class TypeAhead {
     /** How long a pause between letters starts a new prefix. Basis: common practice for list type-ahead. */
@@ -26,6 +27,12 @@ public final class TypeAhead {
     /** @param millis a monotonic clock in milliseconds (tests hand in their own) */
     public TypeAhead(LongSupplier millis) {
         this.millis = Objects.requireNonNull(millis, "millis");
+    }
+
+    /** Starts a new prefix with {@code typed} (the longer one matched nothing). */
+    String restart(String typed) {
+        prefix = typed.toLowerCase(Locale.ROOT);
+        return prefix;
     }
 
     /** The prefix typed so far, after {@code typed}; a pause first starts a new one. */
@@ -68,9 +75,11 @@ public final class TypeAhead {
             }
             String prefix = typing.extend(c);
             List<String> shown = box.getItems().stream().map(words).toList();
-            pick(shown, prefix).ifPresent(i -> {
-                box.getSelectionModel().select(i);
-            });
+            OptionalInt picked = pick(shown, prefix);
+            if (picked.isEmpty() && prefix.length() > 1) {
+                picked = pick(shown, typing.restart(c));
+            }
+            picked.ifPresent(i -> box.getSelectionModel().select(i));
             e.consume();
         });
     }
