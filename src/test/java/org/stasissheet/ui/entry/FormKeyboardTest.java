@@ -292,6 +292,20 @@ class FormKeyboardTest {
     }
 
     @Test
+    @DisplayName("item 5: a pasted value implausible in its unit is not taken: the unit that fits is offered")
+    void implausiblePasted(FxRobot robot) throws Exception {
+        paste(robot, "labs-wbc", "150000 x10^9/L");
+        assertEquals("150000 x10^9/L", text("labs.wbc"), "kept as pasted until answered");
+        Label reading = node(robot, "labs-wbc-reading");
+        assertTrue(reading.getText().startsWith("CHECK: "), reading.getText());
+        Button perMicrolitre = node(robot, "labs-wbc-take-0");
+        assertEquals("use 150000 /µL", perMicrolitre.getText());
+        FormHarness.fx(perMicrolitre::fire);
+        assertEquals("150000", text("labs.wbc"));
+        assertEquals("/uL", unit("labs.wbc"), "150000 /µL = 150 ×10⁹/L (definition: 1 µL = 10⁻⁶ L)");
+    }
+
+    @Test
     @DisplayName("item 5: a unit the reader does not know is refused naming the value and unit; the text is kept")
     void unknownUnit(FxRobot robot) throws Exception {
         write(robot, "labs-wbc", "180 furlongs");
