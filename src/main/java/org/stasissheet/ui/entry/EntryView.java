@@ -133,7 +133,7 @@ public final class EntryView {
             hint.setWrapText(true);
             grid.add(hint, 1, row, 2, 1);
             row++;
-            grid.add(problem(field), 0, row, 3, 1);
+            grid.add(problem(field, entry.time()), 0, row, 3, 1);
             return row + 1;
         }
         Control input = input(field);
@@ -160,10 +160,10 @@ public final class EntryView {
             grid.add(hint, 1, row, 2, 1);
         }
         row++;
-        grid.add(problem(field), 0, row, 3, 1);
+        grid.add(problem(field, input), 0, row, 3, 1);
         if (spec.kind() == FieldKind.QUANTITY) {
             row++;
-            grid.add(typedReading(field), 0, row, 3, 1);
+            grid.add(typedReading(field, input), 0, row, 3, 1);
         }
         return row + 1;
     }
@@ -234,7 +234,8 @@ public final class EntryView {
         return box;
     }
 
-    private Node problem(FieldModel field) {
+    /** @param input where the focus goes back to after a fix (its button disappears with the problem) */
+    private Node problem(FieldModel field, Control input) {
         String id = field.spec().id();
         Label message = new Label();
         message.setId(id + "-problem");
@@ -258,7 +259,10 @@ public final class EntryView {
                 b.getStyleClass().add("fix-button");
                 b.setAccessibleText(fix.label() + " for " + field.spec().label() + " (means " + fix.canonical() + ")");
                 b.setTooltip(new Tooltip("means " + fix.canonical()));
-                b.setOnAction(e -> field.apply(fix));
+                b.setOnAction(e -> {
+                    field.apply(fix);
+                    input.requestFocus();
+                });
                 fixes.getChildren().add(b);
             }
         });
@@ -275,7 +279,7 @@ public final class EntryView {
      * How a typed or pasted value was read, or the question it raises with one button per reading
      * ({@code #labs-wbc-reading}, {@code #labs-wbc-take-0}, ...).
      */
-    private Node typedReading(FieldModel field) {
+    private Node typedReading(FieldModel field, Control input) {
         String id = field.spec().id();
         Label message = new Label();
         message.setId(id + "-reading");
@@ -296,7 +300,10 @@ public final class EntryView {
                 b.setId(id + "-take-" + n++);
                 b.getStyleClass().add("fix-button");
                 b.setAccessibleText(r.label() + " for " + field.spec().label());
-                b.setOnAction(e -> field.take(r));
+                b.setOnAction(e -> {
+                    field.take(r);
+                    input.requestFocus(); // the buttons go with the question
+                });
                 takes.getChildren().add(b);
             }
         });

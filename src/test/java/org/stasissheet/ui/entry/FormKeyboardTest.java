@@ -136,6 +136,12 @@ class FormKeyboardTest {
         Button fix = node(robot, "labs-wbc-fix-_uL");
         FormHarness.fx(fix::requestFocus);
         assertEquals("", offScreen(robot));
+        // pressing it by keyboard takes the fix; the button goes with the problem, the focus back to the field
+        press(robot, KeyCode.SPACE);
+        assertEquals("/uL", unit("labs.wbc"));
+        FormHarness.fx(() -> window.session().recomputeNow());
+        assertEquals("labs-wbc", focused());
+        assertEquals("", offScreen(robot));
     }
 
     private boolean insideEntry(FxRobot robot) {
