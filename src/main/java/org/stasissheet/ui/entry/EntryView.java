@@ -29,11 +29,15 @@ import org.stasissheet.measure.UnitOption;
 /**
  * The entry side: one collapsible group per {@link Section}, one row per field, in the order of
  * {@link FormFields} (which is also the tab order). Each row has its label, its input, a unit picker for
- * quantities, and under it the reader's message with any unit fixes. Enter moves to the next field, so a column
- * of lab values can be typed without the mouse.
+ * quantities, and under it the reader's message with any unit fixes. Enter moves to the next field (pickers and
+ * switches included), so a column of lab values can be typed without the mouse; pickers take typed letters
+ * ({@link TypeAhead}); the focused input is always scrolled into view ({@link FocusScroll}); a quantity reads a
+ * decimal comma or a typed or pasted unit when its focus leaves it ({@link FieldModel#readTyped()}).
  *
  * <p>Ids: each input is {@code #<path with dashes>} ({@code #labs-wbc}), its unit picker {@code #labs-wbc-unit},
- * its message {@code #labs-wbc-problem}, a fix button {@code #labs-wbc-fix-<ucum>}.
+ * its message {@code #labs-wbc-problem}, a fix button {@code #labs-wbc-fix-<ucum>}, how typed text was read
+ * {@code #labs-wbc-reading} with a button per reading {@code #labs-wbc-take-<n>}; the time of the assessment is
+ * {@code #assessedAt-date} and {@code #assessedAt-time}.
  */
 public final class EntryView {
     private final EntryViewModel model;
