@@ -127,6 +127,28 @@ class FxShellTest {
     }
 
     @Test
+    @DisplayName("the assessor question shows the name kept, answers what was typed with OK, nothing with Escape")
+    void assessor(FxRobot robot) throws Exception {
+        FxShell shell = new FxShell(owner);
+        CompletableFuture<java.util.Optional<String>> typed = open(() -> shell.askAssessor("Dr Invented Resident"));
+        DialogPane pane = waitForDialog(robot, "assessor-dialog");
+        javafx.scene.control.TextField name = robot.lookup("#assessor-name").query();
+        assertEquals("Dr Invented Resident", name.getText());
+        Platform.runLater(() -> {
+            name.requestFocus();
+            name.setText("Dr Invented Registrar");
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        click(robot, pane, "OK");
+        assertEquals(java.util.Optional.of("Dr Invented Registrar"), typed.get(20, TimeUnit.SECONDS));
+
+        CompletableFuture<java.util.Optional<String>> cancelled = open(() -> shell.askAssessor(""));
+        waitForDialog(robot, "assessor-dialog");
+        robot.type(javafx.scene.input.KeyCode.ESCAPE);
+        assertEquals(java.util.Optional.empty(), cancelled.get(20, TimeUnit.SECONDS));
+    }
+
+    @Test
     @DisplayName("the unsaved-changes dialog names the document and maps each button to its choice")
     void unsaved(FxRobot robot) throws Exception {
         FxShell shell = new FxShell(owner);
