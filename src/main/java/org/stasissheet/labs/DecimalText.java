@@ -8,9 +8,9 @@ import java.util.regex.Pattern;
 /**
  * Numbers as laboratories print them: decimal point or decimal comma, with or without thousands grouping.
  * A number that reads two ways ("1,234" is 1.234 in Lyon and 1234 in Leeds) gives both readings, so the caller
- * asks; nothing is guessed.
+ * asks; nothing is guessed. The form reads a typed number through it too, so both read numbers one way.
  */
-final class DecimalText {
+public final class DecimalText {
     private DecimalText() {
     }
 
@@ -20,7 +20,7 @@ final class DecimalText {
     private static final Pattern GROUPED = Pattern.compile("\\d{1,3}(?:([.,])\\d{3})+(?:([.,])(\\d+))?");
 
     /** The readings of a number token: none (not a number), one, or two when the separator is ambiguous. */
-    static List<BigDecimal> readings(String token) {
+    public static List<BigDecimal> readings(String token) {
         if (PLAIN.matcher(token).matches()) {
             return List.of(new BigDecimal(token));
         }

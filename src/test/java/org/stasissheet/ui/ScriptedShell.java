@@ -7,6 +7,7 @@ import java.util.Deque;
 import java.util.List;
 import java.util.Optional;
 import org.stasissheet.ui.app.Shell;
+import org.stasissheet.ui.draft.RestoreChoice;
 
 /** A shell whose answers a test sets in advance, and which records every question it was asked. */
 public final class ScriptedShell implements Shell {
@@ -14,13 +15,15 @@ public final class ScriptedShell implements Shell {
     public final List<List<String>> problemsShown = new ArrayList<>();
     public final List<String> clipboard = new ArrayList<>();
     public boolean restore;
+    /** The answer when {@link #restore} is false: closing the question, unless a test says otherwise. */
+    public RestoreChoice declined = RestoreChoice.KEEP_FOR_LATER;
     public final Deque<UnsavedChoice> unsavedAnswers = new ArrayDeque<>();
     public final Deque<Path> files = new ArrayDeque<>();
 
     @Override
-    public boolean offerRestore(String detail) {
+    public RestoreChoice offerRestore(String detail) {
         asked.add("restore: " + detail);
-        return restore;
+        return restore ? RestoreChoice.RESTORE : declined;
     }
 
     @Override
@@ -63,6 +66,15 @@ public final class ScriptedShell implements Shell {
     public void showProblems(String title, List<String> lines) {
         asked.add("problems: " + title);
         problemsShown.add(lines);
+    }
+
+    /** Answers to the assessor question, in order; none left: cancelled. */
+    public final Deque<String> assessorAnswers = new ArrayDeque<>();
+
+    @Override
+    public Optional<String> askAssessor(String current) {
+        asked.add("assessor: " + current);
+        return Optional.ofNullable(assessorAnswers.poll());
     }
 
     @Override

@@ -29,6 +29,8 @@ import org.stasissheet.report.WorksheetPdf;
 import org.stasissheet.rules.RuleSet;
 import org.stasissheet.ui.draft.Autosaver;
 import org.stasissheet.ui.draft.DraftStore;
+import org.stasissheet.ui.draft.RestoreDialog;
+import org.stasissheet.ui.entry.AssessedTime;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.FormState;
 import org.stasissheet.worksheet.Worksheet;
@@ -39,8 +41,6 @@ import org.stasissheet.worksheet.Worksheet;
  * touched on the JavaFX thread. Nothing typed is replaced without asking first.
  */
 public final class Actions {
-    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss");
-
     private final CaseSession session;
     private final Shell shell;
     private final Background background;
@@ -107,9 +107,23 @@ public final class Actions {
         if (!mayReplace()) {
             return;
         }
-        session.load(FormJson.blank(preferences.get().units()), Optional.empty());
+        // the time and the author are recorded from the start; both stay editable
+        session.load(FormJson.blank(preferences.get().units())
+                .with("assessedAt", AssessedTime.now(clock))
+                .with("assessor", preferences.get().assessor()), Optional.empty());
         markRunning();
-        status.set("New case");
+        status.set("New case, assessed at " + AssessedTime.show(AssessedTime.now(clock)).time()
+                + (preferences.get().assessor().isEmpty() ? " (no assessor set: Settings, Assessor for new cases)"
+                : " by " + preferences.get().assessor()));
+    }
+
+    /** Asks for the assessor new cases start with, and keeps the answer in the preferences. */
+    public void chooseAssessor() {
+        shell.askAssessor(preferences.get().assessor()).ifPresent(name -> {
+            updatePreferences(preferences.get().withAssessor(name));
+            status.set(preferences.get().assessor().isEmpty() ? "New cases start without an assessor"
+                    : "New cases start with assessor " + preferences.get().assessor());
+        });
     }
 
     /** Opens a packaged demo case (not tied to any file: Save asks where). */
@@ -342,14 +356,16 @@ public final class Actions {
 
     /**
      * Offers the drafts left by sessions that did not end cleanly, newest first, until one is restored; true when
-     * one was. Declined drafts are thrown away; drafts not yet offered stay for the next start; a draft the form
-     * cannot read back is kept under another name and named in the status bar.
+     * one was. A draft is deleted only when the user says so in words; closing the question keeps it, and the
+     * drafts not yet offered, for the next start. A draft the form cannot read back is kept under another name
+     * and named in the status bar.
      */
     boolean offerDraft() {
         List<DraftStore.Draft> found = drafts.crashedDrafts();
         List<String> notes = new ArrayList<>();
         boolean restored = false;
-        for (int i = 0; i < found.size() && !restored; i++) {
+        boolean kept = false;
+        for (int i = 0; i < found.size() && !restored && !kept; i++) {
             DraftStore.Draft d = found.get(i);
             Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
             if (state.isEmpty()) {
@@ -360,25 +376,35 @@ public final class Actions {
                 }
                 continue;
             }
-            String detail = "A draft saved at " + WHEN.format(d.savedAt().atZone(zone))
-                    + d.document().map(p -> " for " + p.getFileName()).orElse(" (never saved to a file)")
-                    + " was found" + (found.size() > 1 ? " (" + (i + 1) + " of " + found.size() + ")." : ".");
-            if (shell.offerRestore(detail)) {
-                session.restore(state.get(), d.document());
-                restored = true;
-                int left = found.size() - i - 1;
-                notes.add(0, "Draft restored: check it, then save" + (left == 0 ? ""
-                        : " (" + left + " more draft" + (left == 1 ? "" : "s") + " will be offered at the next start)"));
-                try {
-                    drafts.adopt(d);
-                } catch (IOException e) {
-                    notes.add("the old draft file stays and will be offered again: " + oneLine(e));
+            Path file = drafts.fileOf(d);
+            String detail = RestoreDialog.text(d, state.get().get("patient.label"), file, zone, i + 1, found.size());
+            switch (shell.offerRestore(detail)) {
+                case RESTORE -> {
+                    session.restore(state.get(), d.document());
+                    restored = true;
+                    int left = found.size() - i - 1;
+                    notes.add(0, "Draft restored: check it, then save" + (left == 0 ? "" : " (" + left + " more draft"
+                            + (left == 1 ? "" : "s") + " will be offered at the next start)"));
+                    try {
+                        drafts.adopt(d);
+                    } catch (IOException e) {
+                        notes.add("the old draft file stays and will be offered again: " + oneLine(e));
+                    }
                 }
-            } else {
-                try {
-                    drafts.discard(d);
-                } catch (IOException e) {
-                    notes.add("Old draft not removed: " + oneLine(e));
+                case KEEP_FOR_LATER -> {
+                    kept = true;
+                    int left = found.size() - i;
+                    notes.add(0, (left == 1 ? "Draft kept for later (" + file + ")"
+                            : left + " drafts kept for later (" + file + " and others)")
+                            + ": offered again at the next start");
+                }
+                case DELETE -> {
+                    try {
+                        drafts.discard(d);
+                        notes.add("Draft deleted as asked: " + file);
+                    } catch (IOException e) {
+                        notes.add("Draft NOT deleted, it stays at " + file + ": " + oneLine(e));
+                    }
                 }
             }
         }

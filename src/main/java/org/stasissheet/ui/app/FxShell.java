@@ -15,6 +15,8 @@ import javafx.scene.input.ClipboardContent;
 import javafx.stage.DirectoryChooser;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
+import org.stasissheet.ui.draft.RestoreChoice;
+import org.stasissheet.ui.draft.RestoreDialog;
 
 /**
  * The desktop's own dialogs. Each dialog pane has an id ({@code restore-draft-dialog}, {@code unsaved-dialog},
@@ -22,8 +24,6 @@ import javafx.stage.Window;
  * test alike.
  */
 public final class FxShell implements Shell {
-    static final ButtonType RESTORE = new ButtonType("Restore the draft", ButtonBar.ButtonData.YES);
-    static final ButtonType THROW_AWAY = new ButtonType("Throw it away", ButtonBar.ButtonData.NO);
     static final ButtonType SAVE = new ButtonType("Save", ButtonBar.ButtonData.YES);
     static final ButtonType DISCARD = new ButtonType("Discard changes", ButtonBar.ButtonData.NO);
     static final ButtonType CANCEL = new ButtonType("Cancel", ButtonBar.ButtonData.CANCEL_CLOSE);
@@ -35,10 +35,9 @@ public final class FxShell implements Shell {
     }
 
     @Override
-    public boolean offerRestore(String detail) {
-        Alert a = alert(Alert.AlertType.CONFIRMATION, "restore-draft-dialog", "Restore the unsaved draft?",
-                "The last session did not end cleanly. " + detail, RESTORE, THROW_AWAY);
-        return a.showAndWait().orElse(THROW_AWAY) == RESTORE;
+    public RestoreChoice offerRestore(String detail) {
+        return RestoreDialog.ask(owner, detail, owner.getScene() == null ? List.of()
+                : owner.getScene().getStylesheets());
     }
 
     @Override
@@ -101,6 +100,21 @@ public final class FxShell implements Shell {
         text.setAccessibleText(title);
         a.getDialogPane().setContent(text);
         a.showAndWait();
+    }
+
+    @Override
+    public Optional<String> askAssessor(String current) {
+        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(current);
+        d.initOwner(owner);
+        d.setTitle("Stasis Sheet");
+        d.setHeaderText("Who assesses new cases on this computer?");
+        d.setContentText("Name written as \"Assessed by\" in every new case (empty: none):");
+        d.getDialogPane().setId("assessor-dialog");
+        d.getEditor().setId("assessor-name");
+        d.getEditor().setAccessibleText("Assessor for new cases");
+        d.getDialogPane().getStylesheets().setAll(owner.getScene() == null ? List.of()
+                : owner.getScene().getStylesheets());
+        return d.showAndWait();
     }
 
     @Override

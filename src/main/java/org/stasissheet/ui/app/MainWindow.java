@@ -1,9 +1,6 @@
 package org.stasissheet.ui.app;
 
 import java.nio.file.Path;
-import java.time.OffsetDateTime;
-import java.time.format.DateTimeFormatter;
-import java.time.temporal.ChronoUnit;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
@@ -80,8 +77,7 @@ public final class MainWindow {
         actions.ruleFolderProperty().set(first.folder());
         entry.unitSystemProperty().bind(Bindings.createObjectBinding(() -> preferences.get().units(), preferences));
 
-        EntryView entryView = new EntryView(entry, () -> OffsetDateTime.now(settings.clock())
-                .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
+        EntryView entryView = new EntryView(entry, settings.clock());
         SheetView sheetView = new SheetView(session.sheet());
         SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
         sides.setOrientation(Orientation.HORIZONTAL);
@@ -259,7 +255,9 @@ public final class MainWindow {
                 () -> actions.updatePreferences(preferences.get().withTextScale(preferences.get().textScale() - 0.1)));
         MenuItem normal = item("System text size", "Shortcut+DIGIT0", "text-normal",
                 () -> actions.updatePreferences(preferences.get().withTextScale(1)));
-        view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal);
+        MenuItem assessor = item("_Assessor for new cases…", null, "action-assessor", actions::chooseAssessor);
+        view.getItems().addAll(new SeparatorMenuItem(), contrast, larger, smaller, normal, new SeparatorMenuItem(),
+                assessor);
 
         Menu register = new Menu("Re_gister");
         register.setId("menu-register");

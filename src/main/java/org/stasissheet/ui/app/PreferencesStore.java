@@ -62,6 +62,7 @@ public final class PreferencesStore {
         p = p.withRuleFolder(path(root.path("ruleFolder")));
         p = p.withHighContrast(root.path("highContrast").asBoolean(false));
         double scale = root.path("textScale").asDouble(1);
+        p = p.withAssessor(root.path("assessor").isTextual() ? root.path("assessor").asText() : "");
         return p.withTextScale(Double.isFinite(scale) ? scale : 1);
     }
 
@@ -90,6 +91,7 @@ public final class PreferencesStore {
         }
         root.put("highContrast", p.highContrast());
         root.put("textScale", p.textScale());
+        root.put("assessor", p.assessor());
         Storage.writePrivately(file, JSON.writeValueAsBytes(root));
     }
 }

@@ -3,6 +3,7 @@ package org.stasissheet.ui.app;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.stasissheet.ui.draft.RestoreChoice;
 
 /**
  * Everything the form asks of the desktop around its window: questions, file pickers, the clipboard. The real
@@ -16,10 +17,11 @@ public interface Shell {
     /**
      * A draft from a session that did not end cleanly was found.
      *
-     * @param detail when it was saved and which file it belonged to, in words
-     * @return true to restore it, false to throw it away
+     * @param detail when it was saved, its patient label, which case file it belonged to and the draft file, in
+     *               words
+     * @return what to do with it; closing the question keeps it for later
      */
-    boolean offerRestore(String detail);
+    RestoreChoice offerRestore(String detail);
 
     /** The form has changes that are not in a file; asked before they would be replaced or closed. */
     UnsavedChoice askUnsaved(String documentName);
@@ -41,6 +43,14 @@ public interface Shell {
 
     /** Tells the user that something could not be done and why, one line per reason. */
     void showProblems(String title, List<String> lines);
+
+    /**
+     * The assessor new cases start with, asked in the settings.
+     *
+     * @param current the name kept now, empty when none
+     * @return the new name (empty to keep none), or empty when the question was cancelled
+     */
+    Optional<String> askAssessor(String current);
 
     /** Puts text on the system clipboard. */
     void copyToClipboard(String text);

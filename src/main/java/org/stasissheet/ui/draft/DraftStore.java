@@ -74,6 +74,11 @@ public final class DraftStore {
         return draftOf(session);
     }
 
+    /** Where a crashed session's draft file is (for the restore question, which names it). */
+    public Path fileOf(Draft crashed) {
+        return draftOf(crashed.session());
+    }
+
     /**
      * Drafts left by sessions that did not end cleanly, newest first. Drafts of forms still open elsewhere are
      * not among them: their lock is held.

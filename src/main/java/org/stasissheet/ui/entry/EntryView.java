@@ -3,7 +3,7 @@ package org.stasissheet.ui.entry;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
-import java.util.function.Supplier;
+import java.time.Clock;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Insets;
 import javafx.scene.Node;
@@ -29,23 +29,32 @@ import org.stasissheet.measure.UnitOption;
 /**
  * The entry side: one collapsible group per {@link Section}, one row per field, in the order of
  * {@link FormFields} (which is also the tab order). Each row has its label, its input, a unit picker for
- * quantities, and under it the reader's message with any unit fixes. Enter moves to the next field, so a column
- * of lab values can be typed without the mouse.
+ * quantities, and under it the reader's message with any unit fixes. Enter moves to the next field (pickers and
+ * switches included), so a column of lab values can be typed without the mouse; pickers take typed letters
+ * ({@link TypeAhead}); the focused input is always scrolled into view ({@link FocusScroll}); a quantity reads a
+ * decimal comma or a typed or pasted unit when its focus leaves it ({@link FieldModel#readTyped()}).
  *
  * <p>Ids: each input is {@code #<path with dashes>} ({@code #labs-wbc}), its unit picker {@code #labs-wbc-unit},
- * its message {@code #labs-wbc-problem}, a fix button {@code #labs-wbc-fix-<ucum>}.
+ * its message {@code #labs-wbc-problem}, a fix button {@code #labs-wbc-fix-<ucum>}, how typed text was read
+ * {@code #labs-wbc-reading} with a button per reading {@code #labs-wbc-take-<n>}; the time of the assessment is
+ * {@code #assessedAt-date} and {@code #assessedAt-time}.
  */
 public final class EntryView {
     private final EntryViewModel model;
     private final VBox groups = new VBox();
     private final ScrollPane root = new ScrollPane(groups);
     private final List<Control> inputs = new ArrayList<>();
-    private final Supplier<String> now;
+    /** What Enter visits, in order: every field's own input (pickers and switches included), no unit pickers. */
+    private final List<Control> enterOrder = new ArrayList<>();
+    private final Clock clock;
 
-    /** @param now the current date and time as ISO text, for the "now" button beside "assessed at" */
-    public EntryView(EntryViewModel model, Supplier<String> now) {
+    /**
+     * @param clock the current date and time and the time zone, for the time of the assessment (its "now"
+     *              button, and the offset a typed time is recorded with)
+     */
+    public EntryView(EntryViewModel model, Clock clock) {
         this.model = Objects.requireNonNull(model, "model");
-        this.now = Objects.requireNonNull(now, "now");
+        this.clock = Objects.requireNonNull(clock, "clock");
         groups.getStyleClass().add("entry-groups");
         root.getStyleClass().add("entry-side");
         root.setFitToWidth(true);
@@ -55,6 +64,7 @@ public final class EntryView {
             groups.getChildren().add(section(s));
         }
         groups.addEventFilter(KeyEvent.KEY_PRESSED, this::enterMovesOn);
+        FocusScroll.keepInView(root);
     }
 
     public Node node() {
@@ -97,6 +107,8 @@ public final class EntryView {
             row = addRow(grid, row, model.field(spec.path()));
         }
         TitledPane pane = new TitledPane(s.title(), grid);
+        // no sliding: a field focused in a section that opens must be scrolled to where it ends up, at once
+        pane.setAnimated(false);
         pane.setId("section-" + s.name().toLowerCase(java.util.Locale.ROOT));
         pane.setExpanded(s.expandedAtStart());
         pane.setAccessibleText(s.title());
@@ -107,6 +119,27 @@ public final class EntryView {
         FieldSpec spec = field.spec();
         Label label = new Label(spec.label());
         label.getStyleClass().add("field-label");
+        grid.add(label, 0, row);
+        if (spec.kind() == FieldKind.DATE_TIME) {
+            DateTimeEntry entry = new DateTimeEntry(field, clock);
+            label.setLabelFor(entry.date());
+            inputs.add(entry.date());
+            inputs.add(entry.time());
+            enterOrder.add(entry.date());
+            enterOrder.add(entry.time());
+            grid.add(entry.inputs(), 1, row);
+            grid.add(entry.nowButton(), 2, row);
+            row++;
+            grid.add(entry.message(), 1, row, 2, 1);
+            row++;
+            Label hint = new Label(spec.hint());
+            hint.getStyleClass().add("field-hint");
+            hint.setWrapText(true);
+            grid.add(hint, 1, row, 2, 1);
+            row++;
+            grid.add(problem(field, entry.time()), 0, row, 3, 1);
+            return row + 1;
+        }
         Control input = input(field);
         input.setId(spec.id());
         input.setAccessibleText(spec.label());
@@ -116,17 +149,10 @@ public final class EntryView {
         }
         label.setLabelFor(input);
         inputs.add(input);
-        grid.add(label, 0, row);
+        enterOrder.add(input);
         if (spec.kind() == FieldKind.QUANTITY) {
             grid.add(input, 1, row);
             grid.add(unitPicker(field), 2, row);
-        } else if (spec.kind() == FieldKind.DATE_TIME) {
-            Button nowButton = new Button("now");
-            nowButton.setId(spec.id() + "-now");
-            nowButton.setAccessibleText("Set " + spec.label() + " to the current date and time");
-            nowButton.setOnAction(e -> field.textProperty().set(now.get()));
-            grid.add(input, 1, row);
-            grid.add(nowButton, 2, row);
         } else {
             grid.add(input, 1, row, 2, 1);
         }
@@ -138,7 +164,11 @@ public final class EntryView {
             grid.add(hint, 1, row, 2, 1);
         }
         row++;
-        grid.add(problem(field), 0, row, 3, 1);
+        grid.add(problem(field, input), 0, row, 3, 1);
+        if (spec.kind() == FieldKind.QUANTITY) {
+            row++;
+            grid.add(typedReading(field, input), 0, row, 3, 1);
+        }
         return row + 1;
     }
 
@@ -150,6 +180,7 @@ public final class EntryView {
                 PickerBinding.bind(box, field.textProperty(), spec.choices(), Choice::code, Choice::unrecognised,
                         Choice::label, Choice::label);
                 box.setMaxWidth(Double.MAX_VALUE);
+                TypeAhead.install(box, Choice::label, () -> System.nanoTime() / 1_000_000);
                 return box;
             }
             case SWITCH -> {
@@ -160,7 +191,20 @@ public final class EntryView {
                 return box;
             }
             default -> {
-                TextField text = new TextField();
+                TextField text = spec.kind() == FieldKind.QUANTITY ? new TextField() {
+                    @Override
+                    public void paste() {
+                        super.paste();
+                        field.readTyped(); // a pasted "180 x10^9/L" is read at once, value and unit
+                    }
+                } : new TextField();
+                if (spec.kind() == FieldKind.QUANTITY) {
+                    text.focusedProperty().addListener((o, was, now) -> {
+                        if (!now) {
+                            field.readTyped();
+                        }
+                    });
+                }
                 text.textProperty().bindBidirectional(field.textProperty());
                 text.getStyleClass().add(spec.kind() == FieldKind.QUANTITY || spec.kind() == FieldKind.WHOLE
                         ? "number-input" : "text-input-field");
@@ -194,7 +238,8 @@ public final class EntryView {
         return box;
     }
 
-    private Node problem(FieldModel field) {
+    /** @param input where the focus goes back to after a fix (its button disappears with the problem) */
+    private Node problem(FieldModel field, Control input) {
         String id = field.spec().id();
         Label message = new Label();
         message.setId(id + "-problem");
@@ -218,7 +263,10 @@ public final class EntryView {
                 b.getStyleClass().add("fix-button");
                 b.setAccessibleText(fix.label() + " for " + field.spec().label() + " (means " + fix.canonical() + ")");
                 b.setTooltip(new Tooltip("means " + fix.canonical()));
-                b.setOnAction(e -> field.apply(fix));
+                b.setOnAction(e -> {
+                    field.apply(fix);
+                    input.requestFocus();
+                });
                 fixes.getChildren().add(b);
             }
         });
@@ -231,21 +279,89 @@ public final class EntryView {
         return box;
     }
 
-    /** Enter in a text field moves to the next text field, as Tab would but skipping the unit pickers. */
+    /**
+     * How a typed or pasted value was read, or the question it raises with one button per reading
+     * ({@code #labs-wbc-reading}, {@code #labs-wbc-take-0}, ...).
+     */
+    private Node typedReading(FieldModel field, Control input) {
+        String id = field.spec().id();
+        Label message = new Label();
+        message.setId(id + "-reading");
+        message.getStyleClass().add("field-reading");
+        message.setWrapText(true);
+        message.textProperty().bind(Bindings.createStringBinding(() -> {
+            String r = field.readingProperty().get();
+            return r.isEmpty() ? "" : field.readingsProperty().isEmpty() && !r.startsWith("read ") ? "NOT READ: " + r
+                    : field.readingsProperty().isEmpty() ? r : "CHECK: " + r;
+        }, field.readingProperty(), field.readingsProperty()));
+        message.setAccessibleRole(javafx.scene.AccessibleRole.TEXT);
+        FlowPane takes = new FlowPane(6, 4);
+        field.readingsProperty().addListener((javafx.collections.ListChangeListener<TypedReading>) c -> {
+            takes.getChildren().clear();
+            int n = 0;
+            for (TypedReading r : field.readingsProperty()) {
+                Button b = new Button(r.label());
+                b.setId(id + "-take-" + n++);
+                b.getStyleClass().add("fix-button");
+                b.setAccessibleText(r.label() + " for " + field.spec().label());
+                b.setOnAction(e -> {
+                    field.take(r);
+                    input.requestFocus(); // the buttons go with the question
+                });
+                takes.getChildren().add(b);
+            }
+        });
+        VBox box = new VBox(2, message, takes);
+        box.getStyleClass().add("reading-box");
+        box.visibleProperty().bind(field.readingProperty().isNotEmpty());
+        box.managedProperty().bind(box.visibleProperty());
+        return box;
+    }
+
+    /**
+     * Enter moves to the next field's input, as Tab would but skipping the unit pickers: text fields, pickers,
+     * switches and the date and time alike. An open picker list keeps its Enter (it takes the highlighted choice).
+     * A quantity's typed text is read first ({@link FieldModel#readTyped()}), so "5,6" or a pasted unit is settled
+     * before the next field.
+     */
     private void enterMovesOn(KeyEvent e) {
-        if (e.getCode() != KeyCode.ENTER || !(e.getTarget() instanceof TextField current)) {
+        if (e.getCode() != KeyCode.ENTER || e.isShortcutDown() || e.isAltDown()) {
             return;
         }
-        int i = inputs.indexOf(current);
-        for (int j = i + 1; i >= 0 && j < inputs.size(); j++) {
-            Control next = inputs.get(j);
-            if (next instanceof TextField && next.isVisible()) {
+        Control current = ownInput(e.getTarget());
+        if (current == null || current instanceof ComboBox<?> open && open.isShowing()) {
+            return;
+        }
+        if (current instanceof javafx.scene.control.DatePicker picker) {
+            DateTimeEntry.commitTyped(picker);
+        }
+        int i = enterOrder.indexOf(current);
+        for (int j = i + 1; j < enterOrder.size(); j++) {
+            Control next = enterOrder.get(j);
+            if (next.isVisible() && !next.isDisabled()) {
+                if (current instanceof TextField) {
+                    fieldOf(current).ifPresent(FieldModel::readTyped);
+                }
                 expandSectionOf(next);
                 next.requestFocus();
                 e.consume();
                 return;
             }
         }
+    }
+
+    /** The field input the event target is, or lies inside (the text editor of a date picker). */
+    private Control ownInput(Object target) {
+        for (Node n = target instanceof Node node ? node : null; n != null; n = n.getParent()) {
+            if (n instanceof Control c && enterOrder.contains(c)) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    private java.util.Optional<FieldModel> fieldOf(Control input) {
+        return model.fields().stream().filter(f -> f.spec().id().equals(input.getId())).findFirst();
     }
 
     private static void expandSectionOf(Node n) {

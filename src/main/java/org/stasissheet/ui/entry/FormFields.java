@@ -114,7 +114,7 @@ public final class FormFields {
         }
 
         list.add(simple(Section.RECORD, "assessedAt", "Assessed at", FieldKind.DATE_TIME,
-                "YYYY-MM-DDThh:mm+01:00 (ISO 8601 with offset)"));
+                "date (YYYY-MM-DD) and time of day (HH:mm, 24-hour); recorded with this computer's time zone"));
         list.add(simple(Section.RECORD, "assessor", "Assessed by", FieldKind.TEXT, ""));
         return List.copyOf(list);
     }

@@ -140,7 +140,7 @@ class FormWindowTest {
     }
 
     @Test
-    @DisplayName("declining the draft throws it away and opens the demo case")
+    @DisplayName("closing the restore question keeps the draft for the next start and opens the demo case")
     void crashDecline(FxRobot robot) throws Exception {
         type(robot, "patient-label", "Invented patient, bed 13");
         Path draft = window.drafts().draftFile();
@@ -150,6 +150,7 @@ class FormWindowTest {
         ScriptedShell next = new ScriptedShell();
         MainWindow again = FormHarness.open(FormHarness.settings(data, next));
         assertEquals("Demo patient A, ward 7", again.session().entry().field("patient.label").textProperty().get());
+        assertTrue(Files.exists(draft) && read(draft).contains("bed 13"), "the draft is kept");
         FormHarness.fx(() -> again.stage().hide());
     }
 

@@ -20,12 +20,23 @@ class PreferencesStoreTest {
     void roundTrip() throws Exception {
         Preferences p = Preferences.DEFAULTS.withUnits(UnitSystem.CONVENTIONAL)
                 .withRecent(dir.resolve("a.json")).withRecent(dir.resolve("b.json"))
-                .withRuleFolder(Optional.of(dir.resolve("rules"))).withHighContrast(true).withTextScale(1.25);
+                .withRuleFolder(Optional.of(dir.resolve("rules"))).withHighContrast(true).withTextScale(1.25)
+                .withAssessor("Dr Invented Resident");
         PreferencesStore store = new PreferencesStore(dir);
         store.save(p);
         assertEquals(p, store.load());
         assertEquals("rw-------", PosixFilePermissions.toString(
                 Files.getPosixFilePermissions(dir.resolve(PreferencesStore.FILE))));
+    }
+
+    @Test
+    @DisplayName("the assessor is kept on one line, cut to its length limit, and empty when absent or not text")
+    void assessor() throws Exception {
+        assertEquals("Dr A. Invented", Preferences.DEFAULTS.withAssessor("  Dr A.\nInvented\u0085 ").assessor()
+                .replace("  ", " "));
+        assertEquals(Preferences.MAX_ASSESSOR, Preferences.DEFAULTS.withAssessor("x".repeat(500)).assessor().length());
+        Files.writeString(dir.resolve(PreferencesStore.FILE), "{\"assessor\": 42}");
+        assertEquals("", new PreferencesStore(dir).load().assessor());
     }
 
     @Test
