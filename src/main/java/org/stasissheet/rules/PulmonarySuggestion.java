@@ -77,9 +77,9 @@ public record PulmonarySuggestion(Optional<Integer> suggested, Optional<Integer>
 
         List<String> low = new ArrayList<>();
         spo2.filter(m -> target.test(m, Comparison.BELOW)).ifPresent(m -> low.add("SpO2 " + m.entered()
-                + " is below " + target.describe() + ", the lower end of the usual target range"));
+                + " is below " + limitFor(target, m) + ", the lower end of the usual target range"));
         pao2.filter(m -> failure.test(m, Comparison.BELOW)).ifPresent(m -> low.add("PaO2 " + m.entered()
-                + " is below " + failure.describe() + " (hypoxaemic respiratory failure)"));
+                + " is below " + limitFor(failure, m) + " (hypoxaemic respiratory failure)"));
         Optional<Integer> calledFor = low.isEmpty() ? Optional.empty() : Optional.of(OXYGEN_GRADE);
 
         String need;
@@ -125,6 +125,12 @@ public record PulmonarySuggestion(Optional<Integer> suggested, Optional<Integer>
                 + " [" + t.basis().words() + "]. PaO2 cut-off: " + f.source() + " [" + f.basis().words() + "]."
                 + " A suggestion never lowers the grade set.";
         return new PulmonarySuggestion(suggested, calledFor, set, need, cautions, basis);
+    }
+
+    /** The limit in the unit the value was entered in when the source gives that figure ("8 kPa" for a kPa value). */
+    private static String limitFor(Threshold t, Measurement m) {
+        return t.figures().stream().filter(q -> q.unit().equals(m.entered().unit())).findFirst()
+                .map(Object::toString).orElseGet(t::describe);
     }
 
     private static String equivalents(Threshold t) {

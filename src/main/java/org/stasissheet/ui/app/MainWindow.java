@@ -35,6 +35,7 @@ import org.stasissheet.ui.entry.EntryView;
 import org.stasissheet.ui.entry.EntryViewModel;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.UnitSystem;
+import org.stasissheet.ui.grade.PulmonarySuggestionView;
 import org.stasissheet.ui.sheet.SheetView;
 import org.stasissheet.worksheet.Cautions;
 
@@ -59,6 +60,7 @@ public final class MainWindow {
     private final FormSettings settings;
     private final Shell shell;
     private final LabLanding labLanding;
+    private final PulmonarySuggestionView suggestion;
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -83,6 +85,8 @@ public final class MainWindow {
         EntryView entryView = new EntryView(entry, () -> OffsetDateTime.now(settings.clock())
                 .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
         SheetView sheetView = new SheetView(session.sheet());
+        suggestion = new PulmonarySuggestionView(session.sheet(), entry.field("findings.pulmonaryGrade"));
+        PulmonarySuggestionView.attachUnder(entryView.inputs(), "findings-pulmonaryGrade", suggestion.node());
         SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
         sides.setOrientation(Orientation.HORIZONTAL);
         sides.setDividerPositions(0.42);

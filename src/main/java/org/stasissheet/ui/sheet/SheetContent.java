@@ -152,10 +152,16 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(VerdictWords.hyperviscosity(hv)),
                         hvRaised, hvLines),
                 new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", upper(VerdictWords.leukostasis(lk)),
-                        lkRaised, List.of(lk.reason(), Cautions.GRADING_UNVERIFIED)),
+                        lkRaised, leukostasisLines(ws)),
                 tlCard);
     }
 
+
+    private static List<String> leukostasisLines(Worksheet ws) {
+        List<String> lines = new ArrayList<>(List.of(ws.leukostasis().reason(), Cautions.GRADING_UNVERIFIED));
+        lines.addAll(VerdictWords.pulmonarySuggestion(ws));
+        return lines;
+    }
 
     static List<FlagGroup> flagGroups(Worksheet ws) {
         List<FlagGroup> groups = new ArrayList<>();
