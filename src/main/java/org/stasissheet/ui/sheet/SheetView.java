@@ -63,6 +63,7 @@ public final class SheetView {
         verdicts.setId("verdicts");
         flags.setId("flags");
         inputs.getStyleClass().add("sheet-grid");
+        labelled(inputs);
         chart = new FlowChartView(Bindings.createObjectBinding(
                 () -> model.content().flow(), model.contentProperty()));
         HBox badgeRow = new HBox(8, badge);
@@ -175,7 +176,13 @@ public final class SheetView {
         if (c.worksheet().isEmpty()) {
             return;
         }
-        GridPane volumes = grid("apheresis-volumes");
+        c.worksheet().flatMap(w -> w.apheresis().missing().sentence()).ifPresent(sentence -> {
+            Label missing = cell(sentence, "apheresis-missing");
+            missing.setId("apheresis-missing");
+            missing.getStyleClass().addAll("notice", "notice-incomplete");
+            apheresis.getChildren().add(missing);
+        });
+        GridPane volumes = labelled(grid("apheresis-volumes"));
         int row = 0;
         for (SheetContent.Row r : c.volumes()) {
             volumes.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
@@ -201,7 +208,7 @@ public final class SheetView {
                     cell(e.paraproteinAfterRedistribution(), "row-value"), cell(e.viscosityImmediate(), "row-value"),
                     cell(e.viscosityAfterRedistribution(), "row-value"));
         }
-        GridPane leuka = grid("leukapheresis");
+        GridPane leuka = labelled(grid("leukapheresis"));
         row = 0;
         for (SheetContent.Row r : c.leukapheresis()) {
             leuka.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
@@ -209,6 +216,20 @@ public final class SheetView {
         apheresis.getChildren().addAll(volumes, subheading("Plasma exchange: right after and after redistribution"),
                 exchange, subheading("Leukapheresis"), leuka);
         c.apheresisNotes().forEach(n -> apheresis.getChildren().add(cell("NOTE: " + n, "apheresis-note")));
+    }
+
+    /**
+     * A label column that keeps its full width (a long reason in the value column once squeezed it to three
+     * letters) and a value column that takes the rest and wraps.
+     */
+    private static GridPane labelled(GridPane g) {
+        ColumnConstraints label = new ColumnConstraints();
+        label.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        ColumnConstraints value = new ColumnConstraints();
+        value.setHgrow(Priority.ALWAYS);
+        value.setMinWidth(0);
+        g.getColumnConstraints().setAll(label, value);
+        return g;
     }
 
     private static GridPane grid(String id) {
