@@ -16,6 +16,8 @@ public final class ScriptedShell implements Shell {
     public boolean restore;
     public final Deque<UnsavedChoice> unsavedAnswers = new ArrayDeque<>();
     public final Deque<Path> files = new ArrayDeque<>();
+    /** The folder each PDF export was suggested in. */
+    public final List<Optional<Path>> pdfNear = new ArrayList<>();
 
     @Override
     public boolean offerRestore(String detail) {
@@ -44,6 +46,7 @@ public final class ScriptedShell implements Shell {
     @Override
     public Optional<Path> choosePdfTarget(String suggestedName, Optional<Path> near) {
         asked.add("pdf " + suggestedName);
+        pdfNear.add(near);
         return Optional.ofNullable(files.poll());
     }
 

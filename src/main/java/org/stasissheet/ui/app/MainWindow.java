@@ -126,11 +126,23 @@ public final class MainWindow {
      * Builds the window on {@code stage}, shows it, then offers a crashed session's draft or opens the demo case.
      */
     public static MainWindow open(Stage stage, FormSettings settings) {
+        return open(stage, settings, Optional.empty());
+    }
+
+    /**
+     * As {@link #open(Stage, FormSettings)}, then opens {@code file} (a case, a course or a worksheet PDF given on
+     * the command line) instead of the demo case; after a restored draft it asks before replacing it.
+     */
+    public static MainWindow open(Stage stage, FormSettings settings, Optional<Path> file) {
         MainWindow w = new MainWindow(stage, settings);
         stage.setMinWidth(Math.min(900, javafx.stage.Screen.getPrimary().getVisualBounds().getWidth()));
         stage.setMinHeight(Math.min(600, javafx.stage.Screen.getPrimary().getVisualBounds().getHeight()));
         stage.show();
-        if (!w.actions.offerDraft()) {
+        if (w.actions.offerDraft()) {
+            file.ifPresent(w.actions::openRecent);
+        } else if (file.isPresent()) {
+            w.actions.openFile(file.get());
+        } else {
             w.session.load(Samples.read(settings.demoSample())
                     .flatMap(b -> FormJson.read(b, w.preferences.get().units()))
                     .orElse(FormJson.blank(w.preferences.get().units())), Optional.empty());

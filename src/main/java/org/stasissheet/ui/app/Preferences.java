@@ -10,26 +10,28 @@ import org.stasissheet.ui.entry.UnitSystem;
 /**
  * The user's settings, kept between sessions: the starting units for new entries, the recently used case files
  * (most recent first, at most {@link #MAX_RECENT}), the rule folder of a local protocol (empty: the shipped set),
- * the high-contrast look and the text size factor (1 = the system font size).
+ * the high-contrast look, the text size factor (1 = the system font size) and the folder of the last export.
  */
 public record Preferences(UnitSystem units, List<Path> recentFiles, Optional<Path> ruleFolder, boolean highContrast,
-                          double textScale) {
+                          double textScale, Optional<Path> exportFolder) {
     public static final int MAX_RECENT = 8;
     public static final double MIN_SCALE = 0.8;
     public static final double MAX_SCALE = 2.5;
-    public static final Preferences DEFAULTS = new Preferences(UnitSystem.SI, List.of(), Optional.empty(), false, 1);
+    public static final Preferences DEFAULTS = new Preferences(UnitSystem.SI, List.of(), Optional.empty(), false, 1,
+            Optional.empty());
 
     public Preferences {
         Objects.requireNonNull(units, "units");
         recentFiles = List.copyOf(recentFiles.stream().limit(MAX_RECENT).toList());
         Objects.requireNonNull(ruleFolder, "ruleFolder");
+        Objects.requireNonNull(exportFolder, "exportFolder");
         if (!(textScale >= MIN_SCALE && textScale <= MAX_SCALE)) {
             throw new IllegalArgumentException("textScale must be " + MIN_SCALE + "–" + MAX_SCALE + ": " + textScale);
         }
     }
 
     public Preferences withUnits(UnitSystem u) {
-        return new Preferences(u, recentFiles, ruleFolder, highContrast, textScale);
+        return new Preferences(u, recentFiles, ruleFolder, highContrast, textScale, exportFolder);
     }
 
     /** Moves (or adds) the file to the top of the recent list. */
@@ -38,19 +40,25 @@ public record Preferences(UnitSystem units, List<Path> recentFiles, Optional<Pat
         List<Path> list = new ArrayList<>();
         list.add(abs);
         recentFiles.stream().filter(p -> !p.equals(abs)).forEach(list::add);
-        return new Preferences(units, list, ruleFolder, highContrast, textScale);
+        return new Preferences(units, list, ruleFolder, highContrast, textScale, exportFolder);
     }
 
     public Preferences withRuleFolder(Optional<Path> folder) {
-        return new Preferences(units, recentFiles, folder, highContrast, textScale);
+        return new Preferences(units, recentFiles, folder, highContrast, textScale, exportFolder);
     }
 
     public Preferences withHighContrast(boolean on) {
-        return new Preferences(units, recentFiles, ruleFolder, on, textScale);
+        return new Preferences(units, recentFiles, ruleFolder, on, textScale, exportFolder);
     }
 
     public Preferences withTextScale(double scale) {
         return new Preferences(units, recentFiles, ruleFolder, highContrast,
-                Math.max(MIN_SCALE, Math.min(MAX_SCALE, scale)));
+                Math.max(MIN_SCALE, Math.min(MAX_SCALE, scale)), exportFolder);
+    }
+
+    /** The folder the next export is suggested in (the folder of the last one). */
+    public Preferences withExportFolder(Optional<Path> folder) {
+        return new Preferences(units, recentFiles, ruleFolder, highContrast, textScale,
+                folder.map(f -> f.toAbsolutePath().normalize()));
     }
 }

@@ -62,7 +62,7 @@ public final class PreferencesStore {
         p = p.withRuleFolder(path(root.path("ruleFolder")));
         p = p.withHighContrast(root.path("highContrast").asBoolean(false));
         double scale = root.path("textScale").asDouble(1);
-        return p.withTextScale(Double.isFinite(scale) ? scale : 1);
+        return p.withTextScale(Double.isFinite(scale) ? scale : 1).withExportFolder(path(root.path("exportFolder")));
     }
 
     private static Optional<Path> path(JsonNode n) {
@@ -90,6 +90,11 @@ public final class PreferencesStore {
         }
         root.put("highContrast", p.highContrast());
         root.put("textScale", p.textScale());
+        if (p.exportFolder().isPresent()) {
+            root.put("exportFolder", p.exportFolder().get().toString());
+        } else {
+            root.putNull("exportFolder");
+        }
         Storage.writePrivately(file, JSON.writeValueAsBytes(root));
     }
 }

@@ -68,6 +68,12 @@ public final class FlowChartView {
     }
 
     private void show(FlowChartModel m) {
+        // no series (no hematocrit): no empty frame; the notes below say why
+        boolean drawn = !m.series().isEmpty();
+        for (Node n : List.of(chart, toggles)) {
+            n.setVisible(drawn);
+            n.setManaged(drawn);
+        }
         toggles.getChildren().clear();
         for (FlowSeries s : m.series()) {
             boolean on = shown.getOrDefault(s.id(), s.shownAtStart());
