@@ -8,6 +8,7 @@ import org.stasissheet.files.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
 import org.stasissheet.ui.app.MainWindow;
+import org.stasissheet.ui.app.ShutdownGuard;
 import org.stasissheet.load.Inputs;
 import org.stasissheet.ui.draft.Autosaver;
 
@@ -33,6 +34,7 @@ public final class FormApp extends Application {
         // one argument is a file to open (Main has checked that it exists); none opens the demo case
         java.util.Optional<java.nio.file.Path> file = getParameters().getRaw().stream().findFirst()
                 .map(java.nio.file.Path::of);
-        MainWindow.open(stage, userSettings(), file);
+        // SIGTERM (logout, kill) saves the draft instead of losing the last edits
+        ShutdownGuard.install(MainWindow.open(stage, userSettings(), file));
     }
 }
