@@ -42,6 +42,9 @@ class ShutdownTest {
     @DisplayName("shutdown with a job in flight: the draft holds the last edit, nothing is thrown or printed")
     void draftSavedWithWorkInFlight() throws Exception {
         FormHarness.settle(window);
+        ShutdownGuard guard = WaitForAsyncUtils.asyncFx(() -> new ShutdownGuard(window, Duration.ofSeconds(5)))
+                .get(20, TimeUnit.SECONDS);
+        // the edit and the shutdown come together: the unsaved-changes flag has not caught up yet
         FormHarness.fx(() -> window.session().entry().field("patient.label").textProperty().set("Invented bed 7"));
         CountDownLatch running = new CountDownLatch(1);
         window.background().run(() -> {
@@ -59,7 +62,6 @@ class ShutdownTest {
         try {
             System.setOut(capture);
             System.setErr(capture);
-            ShutdownGuard guard = new ShutdownGuard(window, Duration.ofSeconds(5));
             saved = guard.saveDraft(); // from this test thread, as the JVM's hook thread would
             // what used to throw RejectedExecutionException: an autosave and more work after the shutdown
             FormHarness.fx(() -> window.session().entry().field("patient.label").textProperty().set("later"));
@@ -84,7 +86,9 @@ class ShutdownTest {
         FormHarness.fx(() -> window.actions().openFile(Path.of("samples", "iga-borderline.json")));
         FormHarness.settle(window);
         assertFalse(window.session().dirtyProperty().get());
-        assertTrue(new ShutdownGuard(window, Duration.ofSeconds(5)).saveDraft());
+        ShutdownGuard guard = WaitForAsyncUtils.asyncFx(() -> new ShutdownGuard(window, Duration.ofSeconds(5)))
+                .get(20, TimeUnit.SECONDS);
+        assertTrue(guard.saveDraft());
         assertFalse(Files.exists(window.drafts().draftFile()));
         assertTrue(new org.stasissheet.ui.draft.DraftStore(data).crashedDrafts().isEmpty());
     }
