@@ -81,7 +81,7 @@ class PulmonarySuggestionTest {
     }
 
     @Test
-    @DisplayName("above WBC 100 a low PaO2 is still suggested, with the artefact and oximetry cautions (Van de Louw 2016)")
+    @DisplayName("above WBC 100 a low PaO2 is still suggested, with both artefact cautions (Van de Louw 2016)")
     void highCountCautions() {
         PulmonarySuggestion s = suggest(TestCases.a().leukemia(Leukemia.AML, false).lab(Analyte.WBC, 150, "10*9/L")
                 .lab(Analyte.PAO2, 50, "mm[Hg]").lab(Analyte.SPO2, 96, "%"));
@@ -93,7 +93,7 @@ class PulmonarySuggestionTest {
     }
 
     @Test
-    @DisplayName("at WBC 100 exactly (the limit is 'above 100') no artefact caution; without a count the doubt is named")
+    @DisplayName("at WBC 100 exactly ('above 100') no artefact caution; without a count the doubt is named")
     void cautionLimits() {
         assertTrue(suggest(TestCases.a().lab(Analyte.WBC, 100, "10*9/L").lab(Analyte.PAO2, 50, "mm[Hg]"))
                 .cautions().isEmpty());
@@ -128,7 +128,9 @@ class PulmonarySuggestionTest {
     @Test
     @DisplayName("the shipped cut-offs are tagged from memory, as no source in our reference gives them")
     void shippedCutOffsAreFromMemory() {
-        assertEquals(Basis.FROM_MEMORY, TestCases.SHIPPED.parameter(RequiredParameters.SUGGEST_SPO2_TARGET_LOW).basis());
-        assertEquals(Basis.FROM_MEMORY, TestCases.SHIPPED.parameter(RequiredParameters.SUGGEST_PAO2_FAILURE).basis());
+        for (String id : new String[] {RequiredParameters.SUGGEST_SPO2_TARGET_LOW,
+                RequiredParameters.SUGGEST_PAO2_FAILURE}) {
+            assertEquals(Basis.FROM_MEMORY, TestCases.SHIPPED.parameter(id).basis(), id);
+        }
     }
 }

@@ -24,9 +24,9 @@ import org.stasissheet.ui.entry.FormState;
  * at SIGTERM the toolkit's own shutdown hook stops that thread at the same moment (the first version waited for it
  * and saved nothing). Instead the form's text is recorded on the JavaFX thread after every edit (a copy of the
  * fields' strings, microseconds) and turned into case JSON at shutdown. A form that differs from what was last
- * saved or opened keeps its draft, so the next start offers it; a form identical to it ends its session cleanly. It prints nothing:
- * at shutdown nobody reads a terminal, and a stack trace would only alarm. A window closed the normal way removes
- * the hook, because the close has already dealt with the draft.
+ * saved or opened keeps its draft, so the next start offers it; a form identical to it ends its session cleanly.
+ * It prints nothing: at shutdown nobody reads a terminal, and a stack trace would only alarm. A window closed the
+ * normal way removes the hook, because the close has already dealt with the draft.
  */
 public final class ShutdownGuard {
     /** How long the shutdown path lets background jobs in flight finish before it writes the draft. */

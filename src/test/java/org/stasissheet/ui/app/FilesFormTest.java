@@ -47,7 +47,7 @@ class FilesFormTest {
     }
 
     @Test
-    @DisplayName("Export suggests <label>-<assessment date>.pdf, then the folder of the last export (kept in preferences)")
+    @DisplayName("Export suggests <label>-<assessment date>.pdf, then the last export folder (kept in preferences)")
     void exportNameAndFolder() throws Exception {
         Path sample = Path.of("samples", "aml-breathless.json");
         FormHarness.fx(() -> window.actions().openFile(sample));
