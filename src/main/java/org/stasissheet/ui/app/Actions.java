@@ -474,6 +474,9 @@ public final class Actions {
             if (WorksheetPdfs.looksLikePdf(file, bytes)) {
                 try {
                     WorksheetPdfs.ReadBack back = WorksheetPdfs.read(bytes);
+                    if (org.stasissheet.load.Inputs.isCourse(back.caseJson())) {
+                        return latestOfCourse(file, back.caseJson()); // a course PDF embeds its course
+                    }
                     return new Opened(back.caseJson(), List.of(), true, back.warnings());
                 } catch (IOException e) {
                     return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));

@@ -99,6 +99,23 @@ class FilesFormTest {
     }
 
     @Test
+    @DisplayName("a course PDF given at start opens the latest assessment of the course it embeds")
+    void coursePdfAtStart() throws Exception {
+        Path course = Path.of("samples", "courses", "igm-exchange-series.json");
+        Path pdf = data.resolve("course.pdf");
+        assertEquals(0, org.stasissheet.cli.StasisCommand.run(new String[] {"course", course.toString(), "-o",
+                pdf.toString()}, new java.io.PrintWriter(java.io.Writer.nullWriter()),
+                new java.io.PrintWriter(java.io.Writer.nullWriter())));
+        ScriptedShell other = new ScriptedShell();
+        MainWindow w = openWith(pdf, other);
+        assertTrue(other.problemsShown.isEmpty(), other.problemsShown.toString());
+        assertEquals(Optional.empty(), w.session().documentProperty().get());
+        assertEquals("3.7", w.session().entry().field("labs.serumViscosity").textProperty().get());
+        FormHarness.fx(() -> w.stage().close());
+        w.background().close();
+    }
+
+    @Test
     @DisplayName("a file that is neither a case nor a course nor a PDF: the form says so and stays as it was")
     void unknownFileAtStart() throws Exception {
         Path notes = Files.writeString(data.resolve("notes.txt"), "not a case");
