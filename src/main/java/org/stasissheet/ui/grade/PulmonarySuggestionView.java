@@ -47,7 +47,7 @@ public final class PulmonarySuggestionView {
         accept.getStyleClass().add("grade-suggestion-accept");
         accept.setOnAction(e -> suggestion.get().flatMap(PulmonarySuggestion::suggested)
                 .ifPresent(g -> pulmonaryGrade.textProperty().set(Integer.toString(g))));
-        box.getChildren().addAll(text, accept);
+        box.getChildren().addAll(accept, text);
         box.managedProperty().bind(box.visibleProperty());
         suggestion.addListener((o, was, now) -> show(now, sheet));
         show(suggestion.get(), sheet);
@@ -82,6 +82,9 @@ public final class PulmonarySuggestionView {
         int index = pane.getChildren().indexOf(c);
         Integer column = GridPane.getColumnIndex(c);
         Integer row = GridPane.getRowIndex(c);
+        // the field's label stays level with its input, not in the middle of the taller cell
+        pane.getChildren().stream().filter(n -> n != c && Objects.equals(GridPane.getRowIndex(n), row))
+                .forEach(n -> GridPane.setValignment(n, javafx.geometry.VPos.TOP));
         Integer columnSpan = GridPane.getColumnSpan(c);
         Priority grow = GridPane.getHgrow(c);
         pane.getChildren().remove(index);

@@ -221,7 +221,9 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     static List<ExchangeLine> exchanges(ApheresisPlan plan) {
         List<ExchangeLine> lines = new ArrayList<>();
         for (ExchangeRow r : plan.exchanges()) {
-            lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), value(r.volumeL(), " L", plan.missing()),
+            // a bare dash in the narrow table cell: the sentence above the tables says what to enter
+            String volume = plan.missing().covers(r.volumeL()) ? "—" : value(r.volumeL(), " L", plan.missing());
+            lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), volume,
                     Numbers.rounded(100 * r.intravascularRemaining(), 3) + " %",
                     value(r.paraproteinGPerL().map(ExchangeProjection::immediate), " g/L", plan.missing()),
                     value(r.paraproteinAfterGPerL(), " g/L", plan.missing()),

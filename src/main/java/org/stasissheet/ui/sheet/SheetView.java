@@ -189,12 +189,12 @@ public final class SheetView {
         }
         GridPane exchange = grid("exchange-table");
         // fixed shares, so that the short columns never collapse into one letter per line
-        for (double percent : new double[] {9, 10, 15, 16, 17, 16, 17}) {
+        for (double percent : new double[] {11, 9, 15, 15, 17, 16, 17}) { // the first fits "volumes"
             ColumnConstraints column = new ColumnConstraints();
             column.setPercentWidth(percent);
             exchange.getColumnConstraints().add(column);
         }
-        exchange.addRow(0, cell("plasma volumes", "column-head"), cell("volume", "column-head"),
+        exchange.addRow(0, cell("plasma\nvolumes", "column-head"), cell("volume", "column-head"),
                 cell("intravascular left", "column-head"),
                 cell("paraprotein\n" + ExchangeProjection.IMMEDIATE_SHORT, "column-head"),
                 cell("paraprotein\n" + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT, "column-head"),
