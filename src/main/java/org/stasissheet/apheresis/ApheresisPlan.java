@@ -15,11 +15,13 @@ import org.stasissheet.measure.Estimate;
  * @param intravascularFraction        f of the case's isotype, from the rule set
  * @param exchanges                    rows for 1.0, 1.5 and 2.0 plasma volumes
  * @param notes                        sentences shown with the numbers (approximations they rest on)
+ * @param missing                      what to enter for the numbers that are missing, said once
  */
 public record ApheresisPlan(Estimate<Double> bloodVolumeL, Estimate<Double> plasmaVolumeL,
                             Estimate<Double> plasmaVolumeFromBloodVolumeL, Estimate<Double> paraproteinGPerL,
                             Estimate<Double> intravascularFraction, List<ExchangeRow> exchanges,
-                            LeukapheresisPlan leukapheresis, List<String> notes) {
+                            LeukapheresisPlan leukapheresis, List<String> notes,
+                            MissingInputs missing) {
     public ApheresisPlan {
         Objects.requireNonNull(bloodVolumeL, "bloodVolumeL");
         Objects.requireNonNull(plasmaVolumeL, "plasmaVolumeL");
@@ -29,5 +31,6 @@ public record ApheresisPlan(Estimate<Double> bloodVolumeL, Estimate<Double> plas
         Objects.requireNonNull(leukapheresis, "leukapheresis");
         exchanges = List.copyOf(exchanges);
         notes = List.copyOf(notes);
+        Objects.requireNonNull(missing, "missing");
     }
 }

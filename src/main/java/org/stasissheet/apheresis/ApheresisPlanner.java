@@ -54,8 +54,65 @@ public final class ApheresisPlanner {
             rows.add(new ExchangeRow(v, plasmaVolume.map(pv -> v * pv), ExchangeKinetics.intravascularRemaining(v),
                     paraproteinAfter, viscosityAfter));
         }
+        LeukapheresisPlan leukapheresis = leukapheresis(c, bloodVolume, rules);
         return new ApheresisPlan(bloodVolume, plasmaVolume, plasmaFromBlood, paraprotein, fraction, rows,
-                leukapheresis(c, bloodVolume, rules), NOTES);
+                leukapheresis, NOTES, missing(c, bloodVolume, plasmaVolume, plasmaFromBlood,
+                        leukapheresisOffered(c)));
+    }
+
+    private static boolean leukapheresisOffered(Case c) {
+        return c.condition().leukemia() != Leukemia.NONE && c.condition().leukemia() != Leukemia.APL;
+    }
+
+    /**
+     * One sentence naming what to enter, and where, for the volumes that a missing height, weight, sex or hematocrit
+     * leaves out. Nothing for a child: entering values would not give the adult formulas' numbers.
+     */
+    static MissingInputs missing(Case c, Estimate<Double> bloodVolume, Estimate<Double> plasmaVolume,
+                                 Estimate<Double> plasmaFromBlood, boolean leukapheresis) {
+        Patient p = c.patient();
+        if (p.isChild()) {
+            return MissingInputs.NONE;
+        }
+        List<String> patient = new ArrayList<>();
+        p.sex().ifPresentOrElse(s -> { }, () -> patient.add("sex"));
+        p.height().ifPresentOrElse(h -> { }, () -> patient.add("height"));
+        p.weight().ifPresentOrElse(w -> { }, () -> patient.add("weight"));
+        boolean hematocrit = c.labs().get(Analyte.HEMATOCRIT).isEmpty();
+        if (patient.isEmpty() && !hematocrit) {
+            return MissingInputs.NONE;
+        }
+        java.util.Set<String> covered = new java.util.HashSet<>();
+        List<String> gives = new ArrayList<>();
+        if (!patient.isEmpty()) {
+            bloodVolume.whyUnknown().ifPresent(covered::add);
+            gives.add("the blood volume");
+        }
+        if (p.weight().isEmpty() || hematocrit) {
+            plasmaVolume.whyUnknown().ifPresent(covered::add);
+            gives.add("the plasma volume");
+            gives.add("the exchange volumes");
+        }
+        plasmaFromBlood.whyUnknown().ifPresent(covered::add);
+        if (!patient.isEmpty() && leukapheresis) {
+            gives.add("the blood to process by leukapheresis");
+        }
+        List<String> enter = new ArrayList<>();
+        if (!patient.isEmpty()) {
+            enter.add(and(patient) + " (Patient)");
+        }
+        if (hematocrit) {
+            enter.add("the hematocrit (Laboratory values)");
+        }
+        return new MissingInputs(java.util.Optional.of("Enter " + and(enter) + " to estimate " + and(gives) + "."),
+                covered);
+    }
+
+    private static String and(List<String> parts) {
+        if (parts.size() == 1) {
+            return parts.get(0);
+        }
+        return String.join(", ", parts.subList(0, parts.size() - 1)) + " and " + parts.get(parts.size() - 1);
     }
 
     private static Estimate<Double> plasmaVolume(Patient p, Estimate<Double> hematocrit) {

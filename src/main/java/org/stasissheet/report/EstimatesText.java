@@ -23,6 +23,7 @@ final class EstimatesText {
 
     static void apheresis(StringBuilder sb, ApheresisPlan plan) {
         sb.append("APHERESIS PLANNING NUMBERS (estimates)").append(NL);
+        plan.missing().sentence().ifPresent(m -> sb.append("  ").append(m).append(NL));
         line(sb, "Blood volume (Nadler)", litres(plan.bloodVolumeL()));
         line(sb, "Plasma volume (Kaplan)", litres(plan.plasmaVolumeL()));
         line(sb, "Plasma volume, TBV x (1 - Hct)", litres(plan.plasmaVolumeFromBloodVolumeL()));
@@ -110,7 +111,7 @@ final class EstimatesText {
         return e.known().map(p -> ExchangeProjection.IMMEDIATE_LABEL + ": " + Numbers.rounded(p.immediate(), 3) + unit
                         + "; " + ExchangeProjection.AFTER_REDISTRIBUTION_LABEL + ": "
                         + Numbers.rounded(p.afterRedistribution(), 3) + unit)
-                .orElseGet(() -> NOT_ESTIMATED + e.whyUnknown().orElseThrow());
+                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
     }
 
     private static String litres(Estimate<Double> e) {
@@ -119,12 +120,17 @@ final class EstimatesText {
 
     private static String value(Estimate<Double> e, String unit) {
         return e.known().map(v -> Numbers.rounded(v, 3) + unit)
-                .orElseGet(() -> NOT_ESTIMATED + e.whyUnknown().orElseThrow());
+                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
     }
 
     private static String range(Estimate<ValueRange> e, String unit) {
         return e.known().map(r -> Numbers.rounded(r.low(), 3) + "–" + Numbers.rounded(r.high(), 3) + unit)
-                .orElseGet(() -> NOT_ESTIMATED + e.whyUnknown().orElseThrow());
+                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
+    }
+
+    /** The reason once: one that already says "not estimated" is not prefixed again. */
+    private static String notEstimated(String why) {
+        return why.contains("not estimated") ? why : NOT_ESTIMATED + why;
     }
 
     private static void line(StringBuilder sb, String label, String text) {

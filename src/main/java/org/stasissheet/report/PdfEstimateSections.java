@@ -18,6 +18,7 @@ import java.util.Set;
 import java.util.function.Function;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.apheresis.MissingInputs;
 import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.apheresis.ValueRange;
 import org.stasissheet.flow.FlowEstimates;
@@ -164,13 +165,18 @@ final class PdfEstimateSections {
     static void apheresis(WorksheetPdf pdf, Document doc) throws DocumentException {
         ApheresisPlan plan = pdf.sheet().apheresis();
         doc.add(pdf.heading("Apheresis planning"));
+        MissingInputs missing = plan.missing();
+        if (missing.sentence().isPresent()) {
+            doc.add(pdf.loose(pdf.text(missing.sentence().get(), pdf.bodyBold())));
+        }
         int nadler = pdf.sources().cite(ApheresisSources.NADLER);
         int kaplan = pdf.sources().cite(ApheresisSources.KAPLAN);
         PdfPTable v = pdf.table(3.2f, 4f);
         v.setHeaderRows(0);
-        row(pdf, v, "Total blood volume (Nadler) [" + nadler + "]", litres(plan.bloodVolumeL()));
-        row(pdf, v, "Plasma volume (Kaplan) [" + kaplan + "]", litres(plan.plasmaVolumeL()));
-        row(pdf, v, "Plasma volume (blood volume × (1 − Hct))", litres(plan.plasmaVolumeFromBloodVolumeL()));
+        row(pdf, v, "Total blood volume (Nadler) [" + nadler + "]", litres(plan.bloodVolumeL(), missing));
+        row(pdf, v, "Plasma volume (Kaplan) [" + kaplan + "]", litres(plan.plasmaVolumeL(), missing));
+        row(pdf, v, "Plasma volume (blood volume × (1 − Hct))",
+                litres(plan.plasmaVolumeFromBloodVolumeL(), missing));
         row(pdf, v, "Paraprotein", known(plan.paraproteinGPerL(), x -> Numbers.rounded(x, 3) + " g/L"));
         row(pdf, v, "Intravascular fraction of the isotype", known(plan.intravascularFraction(),
                 x -> Numbers.rounded(x * 100, 3) + " %"));
@@ -186,10 +192,12 @@ final class PdfEstimateSections {
         Set<String> reasons = new LinkedHashSet<>();
         for (ExchangeRow r : plan.exchanges()) {
             t.addCell(pdf.cell(Numbers.rounded(r.plasmaVolumes(), 3), pdf.body()));
-            t.addCell(pdf.cell(orDash(r.volumeL(), x -> Numbers.rounded(x, 3) + " L", reasons), pdf.body()));
+            t.addCell(pdf.cell(orDash(r.volumeL(), x -> Numbers.rounded(x, 3) + " L", reasons, missing),
+                    pdf.body()));
             t.addCell(pdf.cell(Numbers.rounded(r.intravascularRemaining() * 100, 3) + " %", pdf.body()));
-            t.addCell(pdf.cell(orDash(r.paraproteinGPerL(), x -> bothMoments(x, " g/L"), reasons), pdf.body()));
-            t.addCell(pdf.cell(orDash(r.serumViscosity(), x -> bothMoments(x, ""), reasons), pdf.body()));
+            t.addCell(pdf.cell(orDash(r.paraproteinGPerL(), x -> bothMoments(x, " g/L"), reasons, missing),
+                    pdf.body()));
+            t.addCell(pdf.cell(orDash(r.serumViscosity(), x -> bothMoments(x, ""), reasons, missing), pdf.body()));
         }
         doc.add(t);
         for (String reason : reasons) {
@@ -200,7 +208,8 @@ final class PdfEstimateSections {
         PdfPTable l = pdf.table(3.2f, 4f);
         l.setHeaderRows(0);
         row(pdf, l, "Leukapheresis: blood volume to process [" + leuka + "]",
-                known(plan.leukapheresis().processVolumeL(), r -> range(r) + " L"));
+                missing.covers(plan.leukapheresis().processVolumeL()) ? "—"
+                        : known(plan.leukapheresis().processVolumeL(), r -> range(r) + " L"));
         row(pdf, l, "Leukapheresis: white count after one procedure [" + leuka + "]",
                 known(plan.leukapheresis().wbcAfter(), r -> range(r) + " ×10⁹/L"));
         doc.add(l);
@@ -220,8 +229,9 @@ final class PdfEstimateSections {
                 + unit;
     }
 
-    private static String litres(Estimate<Double> e) {
-        return known(e, x -> Numbers.rounded(x, 3) + " L");
+    /** Litres, or a dash where the one "enter …" sentence above already says why. */
+    private static String litres(Estimate<Double> e, MissingInputs missing) {
+        return missing.covers(e) ? "—" : known(e, x -> Numbers.rounded(x, 3) + " L");
     }
 
     private static String range(ValueRange r) {
@@ -235,11 +245,13 @@ final class PdfEstimateSections {
 
     /** The value, or a dash whose reason is collected to be printed once under the table. */
     private static <T> String orDash(Estimate<T> e, Function<T, String> format,
-                                     Set<String> reasons) {
+                                     Set<String> reasons, MissingInputs missing) {
         if (e.isKnown()) {
             return e.known().map(format).orElseThrow();
         }
-        reasons.add(e.whyUnknown().orElseThrow());
+        if (!missing.covers(e)) {
+            reasons.add(e.whyUnknown().orElseThrow());
+        }
         return "—";
     }
 

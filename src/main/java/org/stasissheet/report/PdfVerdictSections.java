@@ -37,7 +37,8 @@ final class PdfVerdictSections {
         t.addCell(pdf.cell(sheet.hyperviscosity().reason(), pdf.small()));
         t.addCell(pdf.cell("Leukostasis (Novotny grading)", pdf.bodyBold()));
         t.addCell(pdf.cell(VerdictWords.leukostasis(sheet.leukostasis()), pdf.bodyBold()));
-        t.addCell(pdf.cell(sheet.leukostasis().reason() + "\n" + organGrades(sheet.source().findings()),
+        t.addCell(pdf.cell(sheet.leukostasis().reason() + "\n" + organGrades(sheet.source().findings())
+                + VerdictWords.pulmonarySuggestion(sheet).stream().map(l -> "\n" + l).reduce("", String::concat),
                 pdf.small()));
         TumorLysisVerdict tl = sheet.tumorLysis();
         t.addCell(pdf.cell("Tumor lysis (Cairo-Bishop)", pdf.bodyBold()));

@@ -60,6 +60,30 @@ public final class VerdictWords {
                 ? ", if the potassium is confirmed" : "");
     }
 
+    /**
+     * The oxygen lines beside the leukostasis verdict: the suggested pulmonary grade (marked as a suggestion, never
+     * applied), the oxygen need, the artefact cautions and the basis. Empty when the grading does not apply and no
+     * oxygen value was entered, so that a paraprotein case is not cluttered.
+     */
+    public static java.util.List<String> pulmonarySuggestion(org.stasissheet.worksheet.Worksheet sheet) {
+        org.stasissheet.rules.PulmonarySuggestion s = sheet.pulmonarySuggestion();
+        boolean values = sheet.source().labs().get(org.stasissheet.measure.Analyte.SPO2).isPresent()
+                || sheet.source().labs().get(org.stasissheet.measure.Analyte.PAO2).isPresent();
+        if (!values && sheet.leukostasis().gate() != LeukostasisVerdict.Gate.GRADED) {
+            return java.util.List.of();
+        }
+        java.util.List<String> lines = new java.util.ArrayList<>();
+        s.headline().ifPresent(h -> lines.add("SUGGESTION, NOT APPLIED: " + h + ". The pulmonary grade set is "
+                + s.gradeSet().map(String::valueOf).orElse("not assessed") + "."));
+        if (!s.offered() && s.calledFor().isPresent()) {
+            lines.add("The pulmonary grade set (" + s.gradeSet().orElseThrow() + ") already covers the oxygen need.");
+        }
+        lines.add(s.oxygenNeed());
+        s.cautions().forEach(c -> lines.add("Caution: " + c));
+        lines.add("Basis: " + s.basis());
+        return lines;
+    }
+
     public static String upperFirst(String s) {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }

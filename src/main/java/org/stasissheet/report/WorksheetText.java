@@ -54,6 +54,7 @@ public final class WorksheetText {
         sb.append("  ").append(VerdictWords.upperFirst(VerdictWords.leukostasis(lk))).append(NL);
         sb.append("    ").append(lk.reason()).append(NL);
         sb.append("    ! ").append(Cautions.GRADING_UNVERIFIED).append(NL);
+        VerdictWords.pulmonarySuggestion(sheet).forEach(l -> sb.append("    ").append(l).append(NL));
         TumorLysisVerdict tl = sheet.tumorLysis();
         if (!tl.applies()) {
             sb.append("  Tumor lysis: ").append(TumorLysisVerdict.NOT_CHECKED).append('.').append(NL).append(NL);

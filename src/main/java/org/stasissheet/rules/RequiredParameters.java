@@ -52,6 +52,9 @@ public final class RequiredParameters {
     public static final String HYPERLEUKOCYTOSIS_PREFIX = "hyperleukocytosis.wbc.";
     public static final String PSEUDOHYPERKALAEMIA_WBC_CLL = "artefact.pseudohyperkalaemia.wbc.CLL";
     public static final String PSEUDOHYPERKALAEMIA_WBC_ANY = "artefact.pseudohyperkalaemia.wbc";
+    public static final String SPURIOUS_HYPOXAEMIA_WBC = "artefact.spuriousHypoxaemia.wbc";
+    public static final String SUGGEST_SPO2_TARGET_LOW = "pulmonarySuggestion.spo2.targetLow";
+    public static final String SUGGEST_PAO2_FAILURE = "pulmonarySuggestion.pao2.respiratoryFailure";
     public static final String TLS_URIC_ACID = "tumorLysis.uricAcid";
     public static final String TLS_POTASSIUM = "tumorLysis.potassium";
     public static final String TLS_PHOSPHATE_ADULT = "tumorLysis.phosphate.adult";
@@ -136,6 +139,9 @@ public final class RequiredParameters {
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "ALL", Analyte.WBC),
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "CML", Analyte.WBC),
             analyte(HYPERLEUKOCYTOSIS_PREFIX + "CLL", Analyte.WBC),
+            analyte(SPURIOUS_HYPOXAEMIA_WBC, Analyte.WBC),
+            analyte(SUGGEST_SPO2_TARGET_LOW, Analyte.SPO2),
+            analyte(SUGGEST_PAO2_FAILURE, Analyte.PAO2),
             analyte(TLS_URIC_ACID, Analyte.URIC_ACID),
             analyte(TLS_POTASSIUM, Analyte.POTASSIUM),
             analyte(TLS_PHOSPHATE_ADULT, Analyte.PHOSPHATE),

@@ -8,12 +8,13 @@ import org.stasissheet.files.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
 import org.stasissheet.ui.app.MainWindow;
+import org.stasissheet.ui.app.ShutdownGuard;
 import org.stasissheet.load.Inputs;
 import org.stasissheet.ui.draft.Autosaver;
 
 /**
  * The desktop form's JavaFX application. {@link org.stasissheet.Main} calls {@link #open} by name when started
- * without arguments, so the command line never loads JavaFX.
+ * without arguments or with one file to open, so the command line never loads JavaFX.
  */
 public final class FormApp extends Application {
     /** Starts the toolkit and opens the form window; returns when the last window has closed. */
@@ -30,6 +31,10 @@ public final class FormApp extends Application {
 
     @Override
     public void start(Stage stage) {
-        MainWindow.open(stage, userSettings());
+        // one argument is a file to open (Main has checked that it exists); none opens the demo case
+        java.util.Optional<java.nio.file.Path> file = getParameters().getRaw().stream().findFirst()
+                .map(java.nio.file.Path::of);
+        // SIGTERM (logout, kill) saves the draft instead of losing the last edits
+        ShutdownGuard.install(MainWindow.open(stage, userSettings(), file));
     }
 }

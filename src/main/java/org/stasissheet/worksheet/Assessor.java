@@ -7,6 +7,7 @@ import org.stasissheet.apheresis.ApheresisPlanner;
 import org.stasissheet.flow.FlowEstimator;
 import org.stasissheet.intake.Case;
 import org.stasissheet.intake.Measurement;
+import org.stasissheet.rules.PulmonarySuggestion;
 import org.stasissheet.rules.RuleSet;
 import org.stasissheet.rules.Verdicts;
 
@@ -20,7 +21,8 @@ public final class Assessor {
         Verdicts.Outcome outcome = Verdicts.assess(c, rules);
         return new Worksheet(c, rules.provenance(), inputs(c), Cautions.STANDING,
                 FlowEstimator.estimate(c, rules), apheresis, outcome.hyperviscosity(),
-                outcome.leukostasis(), outcome.tumorLysis(), outcome.flags());
+                outcome.leukostasis(), outcome.tumorLysis(), outcome.flags(),
+                PulmonarySuggestion.of(c, rules));
     }
 
     static List<InputLine> inputs(Case c) {

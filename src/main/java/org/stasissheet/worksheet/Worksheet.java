@@ -12,18 +12,21 @@ import org.stasissheet.rules.HyperviscosityVerdict;
 import org.stasissheet.rules.LeukostasisVerdict;
 import org.stasissheet.rules.Level;
 import org.stasissheet.rules.Provenance;
+import org.stasissheet.rules.PulmonarySuggestion;
 import org.stasissheet.rules.TumorLysisVerdict;
 
 /**
  * Everything one assessment concluded, ready for any renderer: immutable and complete. Renderers present it
  * and never recompute.
  *
- * @param flags every rule that fired, most urgent level first, then by id
+ * @param flags               every rule that fired, most urgent level first, then by id
+ * @param pulmonarySuggestion the pulmonary grade the oxygen values suggest, offered and never applied
  */
 public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs, List<String> cautions,
                         FlowEstimates flow, ApheresisPlan apheresis,
                         HyperviscosityVerdict hyperviscosity, LeukostasisVerdict leukostasis,
-                        TumorLysisVerdict tumorLysis, List<Flag> flags) {
+                        TumorLysisVerdict tumorLysis, List<Flag> flags,
+                        PulmonarySuggestion pulmonarySuggestion) {
     public static final String FORMAT = "stasis-worksheet/1";
 
     public Worksheet {
@@ -37,6 +40,7 @@ public record Worksheet(Case source, Provenance ruleSet, List<InputLine> inputs,
         Objects.requireNonNull(leukostasis, "leukostasis");
         Objects.requireNonNull(tumorLysis, "tumorLysis");
         flags = List.copyOf(flags);
+        Objects.requireNonNull(pulmonarySuggestion, "pulmonarySuggestion");
     }
 
     /** The most urgent level among the flags; empty when nothing was flagged. */

@@ -89,7 +89,7 @@ class HandoffNoteTest {
                     "common practice", Basis.COMMON_PRACTICE));
         }
         Worksheet many = new Worksheet(s.source(), s.ruleSet(), s.inputs(), s.cautions(), s.flow(), s.apheresis(),
-                s.hyperviscosity(), s.leukostasis(), s.tumorLysis(), flags);
+                s.hyperviscosity(), s.leukostasis(), s.tumorLysis(), flags, s.pulmonarySuggestion());
         List<String> lines = lines(HandoffNote.render(many, true));
         assertTrue(lines.size() >= 3 && lines.size() <= HandoffNote.MAX_LINES, "lines: " + lines.size());
         if (count > HandoffNote.MAX_ACT_NOW_LINES) {

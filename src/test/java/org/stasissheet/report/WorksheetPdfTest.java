@@ -71,7 +71,8 @@ class WorksheetPdfTest {
             List<String> cautions = new java.util.ArrayList<>(s.cautions());
             cautions.add(longer);
             Worksheet more = new Worksheet(s.source(), s.ruleSet(), s.inputs(), cautions, s.flow(), s.apheresis(),
-                    s.hyperviscosity(), s.leukostasis(), s.tumorLysis(), s.flags());
+                    s.hyperviscosity(), s.leukostasis(), s.tumorLysis(), s.flags(),
+                    s.pulmonarySuggestion());
             byte[] bytes = WorksheetPdf.render(more, PdfOptions.defaults("t"), Fixtures.GENERATED,
                     Fixtures.caseJson(LABEL));
             try (PdfProbe pdf = new PdfProbe(bytes)) {

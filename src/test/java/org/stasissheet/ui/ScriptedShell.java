@@ -19,6 +19,8 @@ public final class ScriptedShell implements Shell {
     public RestoreChoice declined = RestoreChoice.KEEP_FOR_LATER;
     public final Deque<UnsavedChoice> unsavedAnswers = new ArrayDeque<>();
     public final Deque<Path> files = new ArrayDeque<>();
+    /** The folder each PDF export was suggested in. */
+    public final List<Optional<Path>> pdfNear = new ArrayList<>();
 
     @Override
     public RestoreChoice offerRestore(String detail) {
@@ -47,6 +49,7 @@ public final class ScriptedShell implements Shell {
     @Override
     public Optional<Path> choosePdfTarget(String suggestedName, Optional<Path> near) {
         asked.add("pdf " + suggestedName);
+        pdfNear.add(near);
         return Optional.ofNullable(files.poll());
     }
 

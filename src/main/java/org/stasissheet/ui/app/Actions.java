@@ -159,11 +159,13 @@ public final class Actions {
             if (opened.problems().isEmpty()) {
                 Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
                 if (state.isPresent()) {
-                    // A case read out of a PDF belongs to no case file: Save asks where.
-                    session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
+                    // A case read out of a PDF or a course belongs to no case file: Save asks where.
+                    session.load(state.get(), pdf || opened.inside().isPresent() ? Optional.empty()
+                            : Optional.of(file));
                     remember(file);
                     markRunning();
-                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : "")
+                    status.set("Opened " + file.getFileName() + opened.inside().map(i -> " (" + i + ")")
+                            .orElse(pdf ? " (the case inside the worksheet PDF)" : "")
                             + opened.warnings().stream().map(w -> ". Warning: " + w).collect(Collectors.joining()));
                     return;
                 }
@@ -272,12 +274,18 @@ public final class Actions {
                     "Fix the entries marked PROBLEM first: a PDF is only made of a complete case."));
             return;
         }
-        String base = session.documentProperty().get().map(p -> p.getFileName().toString().replaceFirst(
-                "\\.json$", "")).orElse("worksheet");
-        Optional<Path> target = shell.choosePdfTarget(base + ".pdf", session.documentProperty().get())
-                .map(p -> withExtension(p, ".pdf"));
+        // "<label>-<assessment date>.pdf" in the folder of the last export (else beside the case file)
+        java.time.LocalDate day = sheet.get().source().assessedAt().map(java.time.OffsetDateTime::toLocalDate)
+                .orElseGet(() -> java.time.LocalDate.now(clock));
+        String suggested = org.stasissheet.files.ExportNames.pdf(sheet.get().source().patient().label(), day);
+        Optional<Path> near = preferences.get().exportFolder().or(() -> session.documentProperty().get());
+        Optional<Path> target = shell.choosePdfTarget(suggested, near).map(p -> withExtension(p, ".pdf"));
         if (target.isEmpty()) {
             return;
+        }
+        Optional<Path> folder = Optional.ofNullable(target.get().toAbsolutePath().getParent());
+        if (!folder.equals(preferences.get().exportFolder())) {
+            updatePreferences(preferences.get().withExportFolder(folder));
         }
         byte[] json = session.caseJson();
         OffsetDateTime now = OffsetDateTime.now(clock);
@@ -448,11 +456,17 @@ public final class Actions {
      * What opening a file gave: the case as JSON bytes, or why not; {@code warnings} are what the reader should
      * know about a case that was opened (a worksheet PDF without the digest of its case).
      */
-    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings,
+                  Optional<String> inside) {
         Opened {
             Objects.requireNonNull(caseJson, "caseJson");
             problems = List.copyOf(problems);
             warnings = List.copyOf(warnings);
+            Objects.requireNonNull(inside, "inside");
+        }
+
+        Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
+            this(caseJson, problems, fromPdf, warnings, Optional.empty());
         }
 
         Opened(byte[] caseJson, List<String> problems) {
@@ -486,12 +500,39 @@ public final class Actions {
             if (WorksheetPdfs.looksLikePdf(file, bytes)) {
                 try {
                     WorksheetPdfs.ReadBack back = WorksheetPdfs.read(bytes);
+                    if (org.stasissheet.load.Inputs.isCourse(back.caseJson())) {
+                        return latestOfCourse(file, back.caseJson()); // a course PDF embeds its course
+                    }
                     return new Opened(back.caseJson(), List.of(), true, back.warnings());
                 } catch (IOException e) {
                     return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
                 }
             }
+            if (org.stasissheet.load.Inputs.isCourse(bytes)) {
+                return latestOfCourse(file, bytes);
+            }
             return new Opened(bytes, List.of());
+        }
+
+        /**
+         * A course opens as the case of its latest assessment (with the course's tumor-lysis baseline), tied to no
+         * file, so that Save never writes a single case over the course.
+         */
+        static Opened latestOfCourse(Path file, byte[] bytes) {
+            org.stasissheet.course.CourseReader.Result r = org.stasissheet.course.CourseReader.read(bytes);
+            if (r instanceof org.stasissheet.course.CourseReader.Rejected rejected) {
+                List<String> lines = new ArrayList<>();
+                lines.add(file.getFileName() + " is a course that could not be read:");
+                rejected.problems().forEach(p -> lines.add(p.toString()));
+                return new Opened(new byte[0], lines);
+            }
+            org.stasissheet.course.Course course = ((org.stasissheet.course.CourseReader.Accepted) r).course();
+            int last = course.assessments().size() - 1;
+            byte[] json = org.stasissheet.intake.CaseWriter.write(course.caseAt(last))
+                    .getBytes(StandardCharsets.UTF_8);
+            return new Opened(json, List.of(), false, List.of(), Optional.of("the latest of the course's "
+                    + course.assessments().size() + " assessments, at " + course.assessments().get(last).at()
+                    + "; Save writes it as a single case"));
         }
 
         private static boolean startsAsPdf(Path file) throws IOException {

@@ -32,6 +32,7 @@ import org.stasissheet.ui.entry.EntryView;
 import org.stasissheet.ui.entry.EntryViewModel;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.UnitSystem;
+import org.stasissheet.ui.grade.PulmonarySuggestionView;
 import org.stasissheet.ui.sheet.SheetView;
 import org.stasissheet.worksheet.Cautions;
 
@@ -56,6 +57,7 @@ public final class MainWindow {
     private final FormSettings settings;
     private final Shell shell;
     private final LabLanding labLanding;
+    private final PulmonarySuggestionView suggestion;
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -79,6 +81,8 @@ public final class MainWindow {
 
         EntryView entryView = new EntryView(entry, settings.clock());
         SheetView sheetView = new SheetView(session.sheet());
+        suggestion = new PulmonarySuggestionView(session.sheet(), entry.field("findings.pulmonaryGrade"));
+        PulmonarySuggestionView.attachUnder(entryView.inputs(), "findings-pulmonaryGrade", suggestion.node());
         SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
         sides.setOrientation(Orientation.HORIZONTAL);
         sides.setDividerPositions(0.42);
@@ -118,11 +122,23 @@ public final class MainWindow {
      * Builds the window on {@code stage}, shows it, then offers a crashed session's draft or opens the demo case.
      */
     public static MainWindow open(Stage stage, FormSettings settings) {
+        return open(stage, settings, Optional.empty());
+    }
+
+    /**
+     * As {@link #open(Stage, FormSettings)}, then opens {@code file} (a case, a course or a worksheet PDF given on
+     * the command line) instead of the demo case; after a restored draft it asks before replacing it.
+     */
+    public static MainWindow open(Stage stage, FormSettings settings, Optional<Path> file) {
         MainWindow w = new MainWindow(stage, settings);
         stage.setMinWidth(Math.min(900, javafx.stage.Screen.getPrimary().getVisualBounds().getWidth()));
         stage.setMinHeight(Math.min(600, javafx.stage.Screen.getPrimary().getVisualBounds().getHeight()));
         stage.show();
-        if (!w.actions.offerDraft()) {
+        if (w.actions.offerDraft()) {
+            file.ifPresent(w.actions::openRecent);
+        } else if (file.isPresent()) {
+            w.actions.openFile(file.get());
+        } else {
             w.session.load(Samples.read(settings.demoSample())
                     .flatMap(b -> FormJson.read(b, w.preferences.get().units()))
                     .orElse(FormJson.blank(w.preferences.get().units())), Optional.empty());

@@ -63,7 +63,7 @@ public final class PreferencesStore {
         p = p.withHighContrast(root.path("highContrast").asBoolean(false));
         double scale = root.path("textScale").asDouble(1);
         p = p.withAssessor(root.path("assessor").isTextual() ? root.path("assessor").asText() : "");
-        return p.withTextScale(Double.isFinite(scale) ? scale : 1);
+        return p.withTextScale(Double.isFinite(scale) ? scale : 1).withExportFolder(path(root.path("exportFolder")));
     }
 
     private static Optional<Path> path(JsonNode n) {
@@ -92,6 +92,11 @@ public final class PreferencesStore {
         root.put("highContrast", p.highContrast());
         root.put("textScale", p.textScale());
         root.put("assessor", p.assessor());
+        if (p.exportFolder().isPresent()) {
+            root.put("exportFolder", p.exportFolder().get().toString());
+        } else {
+            root.putNull("exportFolder");
+        }
         Storage.writePrivately(file, JSON.writeValueAsBytes(root));
     }
 }

@@ -76,6 +76,12 @@ public final class FlowChartView {
     private void show(FlowChartModel m) {
         FlowChartModel was = current;
         current = m;
+        // no series (no hematocrit): no empty frame; the notes below say why
+        boolean drawn = !m.series().isEmpty();
+        for (Node n : List.of(chart, toggles)) {
+            n.setVisible(drawn);
+            n.setManaged(drawn);
+        }
         if (m.equals(was)) {
             return;
         }

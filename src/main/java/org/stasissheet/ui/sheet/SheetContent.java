@@ -7,6 +7,7 @@ import java.util.Objects;
 import java.util.Optional;
 import org.stasissheet.apheresis.ApheresisPlan;
 import org.stasissheet.apheresis.ExchangeRow;
+import org.stasissheet.apheresis.MissingInputs;
 import org.stasissheet.derived.ExchangeProjection;
 import org.stasissheet.apheresis.ValueRange;
 import org.stasissheet.flow.FlowEstimates;
@@ -152,10 +153,16 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
                 new VerdictCard("hyperviscosity", "Hyperviscosity syndrome", upper(VerdictWords.hyperviscosity(hv)),
                         hvRaised, hvLines),
                 new VerdictCard("leukostasis", "Leukostasis (0–3 grading)", upper(VerdictWords.leukostasis(lk)),
-                        lkRaised, List.of(lk.reason(), Cautions.GRADING_UNVERIFIED)),
+                        lkRaised, leukostasisLines(ws)),
                 tlCard);
     }
 
+
+    private static List<String> leukostasisLines(Worksheet ws) {
+        List<String> lines = new ArrayList<>(List.of(ws.leukostasis().reason(), Cautions.GRADING_UNVERIFIED));
+        lines.addAll(VerdictWords.pulmonarySuggestion(ws));
+        return lines;
+    }
 
     static List<FlagGroup> flagGroups(Worksheet ws) {
         List<FlagGroup> groups = new ArrayList<>();
@@ -199,11 +206,13 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     }
 
     static List<Row> volumes(ApheresisPlan plan) {
+        MissingInputs m = plan.missing();
         return List.of(
-                new Row("Total blood volume (Nadler)", value(plan.bloodVolumeL(), " L")),
-                new Row("Plasma volume (Kaplan)", value(plan.plasmaVolumeL(), " L")),
-                new Row("Plasma volume, blood volume × (1 − Hct)", value(plan.plasmaVolumeFromBloodVolumeL(), " L")),
-                new Row("Paraprotein", value(plan.paraproteinGPerL(), " g/L")),
+                new Row("Total blood volume (Nadler)", value(plan.bloodVolumeL(), " L", m)),
+                new Row("Plasma volume (Kaplan)", value(plan.plasmaVolumeL(), " L", m)),
+                new Row("Plasma volume, blood volume × (1 − Hct)",
+                        value(plan.plasmaVolumeFromBloodVolumeL(), " L", m)),
+                new Row("Paraprotein", value(plan.paraproteinGPerL(), " g/L", m)),
                 new Row("Intravascular fraction of the paraprotein",
                         plan.intravascularFraction().known().map(v -> Numbers.rounded(100 * v, 3) + " %")
                                 .orElseGet(() -> plan.intravascularFraction().whyUnknown().orElseThrow())));
@@ -212,20 +221,24 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
     static List<ExchangeLine> exchanges(ApheresisPlan plan) {
         List<ExchangeLine> lines = new ArrayList<>();
         for (ExchangeRow r : plan.exchanges()) {
-            lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), value(r.volumeL(), " L"),
+            // a bare dash in the narrow table cell: the sentence above the tables says what to enter
+            String volume = plan.missing().covers(r.volumeL()) ? "—" : value(r.volumeL(), " L", plan.missing());
+            lines.add(new ExchangeLine(Numbers.plain(r.plasmaVolumes()), volume,
                     Numbers.rounded(100 * r.intravascularRemaining(), 3) + " %",
-                    value(r.paraproteinGPerL().map(ExchangeProjection::immediate), " g/L"),
-                    value(r.paraproteinAfterGPerL(), " g/L"),
-                    value(r.serumViscosity().map(ExchangeProjection::immediate), ""),
-                    value(r.serumViscosity().map(ExchangeProjection::afterRedistribution), "")));
+                    value(r.paraproteinGPerL().map(ExchangeProjection::immediate), " g/L", plan.missing()),
+                    value(r.paraproteinAfterGPerL(), " g/L", plan.missing()),
+                    value(r.serumViscosity().map(ExchangeProjection::immediate), "", plan.missing()),
+                    value(r.serumViscosity().map(ExchangeProjection::afterRedistribution), "", plan.missing())));
         }
         return lines;
     }
 
     static List<Row> leukapheresis(ApheresisPlan plan) {
         return List.of(
-                new Row("Blood to process per leukapheresis", range(plan.leukapheresis().processVolumeL(), " L")),
-                new Row("White count after one procedure", range(plan.leukapheresis().wbcAfter(), " ×10⁹/L")));
+                new Row("Blood to process per leukapheresis",
+                        range(plan.leukapheresis().processVolumeL(), " L", plan.missing())),
+                new Row("White count after one procedure",
+                        range(plan.leukapheresis().wbcAfter(), " ×10⁹/L", plan.missing())));
     }
 
     static List<Row> inputs(Worksheet ws) {
@@ -238,14 +251,25 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         return rows;
     }
 
-    private static String value(Estimate<Double> e, String unit) {
-        return e.known().map(v -> Numbers.rounded(v, 3) + unit)
-                .orElseGet(() -> "not estimated: " + e.whyUnknown().orElseThrow());
+    /** A dash where the one "enter …" sentence above the table already says why. */
+    static final String SEE_ABOVE = "— (see what to enter, above)";
+
+    private static String value(Estimate<Double> e, String unit, MissingInputs missing) {
+        return e.known().map(v -> Numbers.rounded(v, 3) + unit).orElseGet(() -> unknown(e, missing));
     }
 
-    private static String range(Estimate<ValueRange> e, String unit) {
+    private static String range(Estimate<ValueRange> e, String unit, MissingInputs missing) {
         return e.known().map(r -> Numbers.rounded(r.low(), 3) + "–" + Numbers.rounded(r.high(), 3) + unit)
-                .orElseGet(() -> "not estimated: " + e.whyUnknown().orElseThrow());
+                .orElseGet(() -> unknown(e, missing));
+    }
+
+    /** The reason once: a reason that already says "not estimated" is not prefixed again. */
+    private static String unknown(Estimate<?> e, MissingInputs missing) {
+        if (missing.covers(e)) {
+            return SEE_ABOVE;
+        }
+        String why = e.whyUnknown().orElseThrow();
+        return why.contains("not estimated") ? why : "not estimated: " + why;
     }
 
 

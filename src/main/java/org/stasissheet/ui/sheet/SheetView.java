@@ -72,6 +72,7 @@ public final class SheetView {
         verdicts.setId("verdicts");
         flags.setId("flags");
         inputs.getStyleClass().add("sheet-grid");
+        labelled(inputs);
         chart = new FlowChartView(Bindings.createObjectBinding(
                 () -> model.content().flow(), model.contentProperty()));
         HBox badgeRow = new HBox(8, badge);
@@ -260,19 +261,25 @@ public final class SheetView {
         if (c.worksheet().isEmpty()) {
             return;
         }
-        GridPane volumes = grid("apheresis-volumes");
+        c.worksheet().flatMap(w -> w.apheresis().missing().sentence()).ifPresent(sentence -> {
+            Label missing = cell(sentence, "apheresis-missing");
+            missing.setId("apheresis-missing");
+            missing.getStyleClass().addAll("notice", "notice-incomplete");
+            apheresis.getChildren().add(missing);
+        });
+        GridPane volumes = labelled(grid("apheresis-volumes"));
         int row = 0;
         for (SheetContent.Row r : c.volumes()) {
             volumes.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
         }
         GridPane exchange = grid("exchange-table");
         // fixed shares, so that the short columns never collapse into one letter per line
-        for (double percent : new double[] {9, 10, 15, 16, 17, 16, 17}) {
+        for (double percent : new double[] {11, 9, 15, 15, 17, 16, 17}) { // the first fits "volumes"
             ColumnConstraints column = new ColumnConstraints();
             column.setPercentWidth(percent);
             exchange.getColumnConstraints().add(column);
         }
-        exchange.addRow(0, cell("plasma volumes", "column-head"), cell("volume", "column-head"),
+        exchange.addRow(0, cell("plasma\nvolumes", "column-head"), cell("volume", "column-head"),
                 cell("intravascular left", "column-head"),
                 cell("paraprotein\n" + ExchangeProjection.IMMEDIATE_SHORT, "column-head"),
                 cell("paraprotein\n" + ExchangeProjection.AFTER_REDISTRIBUTION_SHORT, "column-head"),
@@ -286,7 +293,7 @@ public final class SheetView {
                     cell(e.paraproteinAfterRedistribution(), "row-value"), cell(e.viscosityImmediate(), "row-value"),
                     cell(e.viscosityAfterRedistribution(), "row-value"));
         }
-        GridPane leuka = grid("leukapheresis");
+        GridPane leuka = labelled(grid("leukapheresis"));
         row = 0;
         for (SheetContent.Row r : c.leukapheresis()) {
             leuka.addRow(row++, cell(r.label(), "row-label"), cell(r.value(), "row-value"));
@@ -297,6 +304,20 @@ public final class SheetView {
         volumeGrid = volumes;
         exchangeGrid = exchange;
         leukaGrid = leuka;
+    }
+
+    /**
+     * A label column that keeps its full width (a long reason in the value column once squeezed it to three
+     * letters) and a value column that takes the rest and wraps.
+     */
+    private static GridPane labelled(GridPane g) {
+        ColumnConstraints label = new ColumnConstraints();
+        label.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        ColumnConstraints value = new ColumnConstraints();
+        value.setHgrow(Priority.ALWAYS);
+        value.setMinWidth(0);
+        g.getColumnConstraints().setAll(label, value);
+        return g;
     }
 
     private static GridPane grid(String id) {
