@@ -171,17 +171,20 @@ public final class CourseText {
         return "rituximab started";
     }
 
-    static String[] names(Projected p) {
+    /** The names of a projection's two values ("right after", "after redistribution", or the usual falls). */
+    public static String[] names(Projected p) {
         return p.kind() == Projected.Kind.EXCHANGE
                 ? new String[] {ExchangeProjection.IMMEDIATE_SHORT, ExchangeProjection.AFTER_REDISTRIBUTION_SHORT}
                 : new String[] {"at the largest usual fall", "at the smallest usual fall"};
     }
 
-    static String amount(double value, Analyte a) {
+    /** A value of a followed analyte with its unit symbol, for the reader. */
+    public static String amount(double value, Analyte a) {
         return UnitSymbols.format(Numbers.rounded(value, 3), a.canonicalUnit());
     }
 
-    private static String percent(double d) {
+    /** A signed difference in per cent. */
+    public static String percent(double d) {
         return (d > 0 ? "+" : "") + Numbers.rounded(d, 2) + " %";
     }
 

@@ -27,6 +27,8 @@ import org.stasissheet.report.HandoffNote;
 import org.stasissheet.report.PdfOptions;
 import org.stasissheet.report.WorksheetPdf;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.course.CourseReader;
+import org.stasissheet.ui.course.CourseModel;
 import org.stasissheet.ui.draft.Autosaver;
 import org.stasissheet.ui.draft.DraftStore;
 import org.stasissheet.ui.entry.FormJson;
@@ -54,6 +56,8 @@ public final class Actions {
             Optional.empty());
     private final Clock clock;
     private final ZoneId zone;
+    /** The course of treatment the form may hold instead of a single case (attached once by the window). */
+    private CourseModel course;
 
     Actions(CaseSession session, Shell shell, Background background, DraftStore drafts, Autosaver autosaver,
             PreferencesStore preferenceStore, ObjectProperty<Preferences> preferences,
@@ -69,6 +73,22 @@ public final class Actions {
         this.clock = Objects.requireNonNull(clock, "clock");
         this.zone = clock.getZone();
         ruleFolder.set(preferences.get().ruleFolder());
+    }
+
+    /** Attaches the course model: from then on Save, open, replace and restore also know about a course. */
+    void attachCourse(CourseModel model) {
+        this.course = Objects.requireNonNull(model, "model");
+    }
+
+    private boolean inCourse() {
+        return course != null && course.active();
+    }
+
+    /** Leaves a course when the form turns to a single case again. */
+    private void endCourse() {
+        if (course != null) {
+            course.end();
+        }
     }
 
     /** What the last command did, in words, for the status bar. */
@@ -93,6 +113,17 @@ public final class Actions {
 
     /** Asks before unsaved changes would be lost; false when the user cancelled (or a save was not made). */
     boolean mayReplace() {
+        if (inCourse()) {
+            // the course holds the form's assessment: it is the document to save, not the case alone
+            if (!course.dirtyProperty().get()) {
+                return true;
+            }
+            return switch (shell.askUnsaved(course.documentName())) {
+                case SAVE -> saveCourseAndWait();
+                case DISCARD -> true;
+                case CANCEL -> false;
+            };
+        }
         if (!session.dirtyProperty().get()) {
             return true;
         }
@@ -107,6 +138,7 @@ public final class Actions {
         if (!mayReplace()) {
             return;
         }
+        endCourse();
         session.load(FormJson.blank(preferences.get().units()), Optional.empty());
         markRunning();
         status.set("New case");
@@ -122,6 +154,7 @@ public final class Actions {
             shell.showProblems("The demo case could not be opened", List.of(name + " is not in this build."));
             return;
         }
+        endCourse();
         session.load(state.get(), Optional.empty());
         markRunning();
         status.set("Demo case " + name + " (invented data; Save asks where to keep it)");
@@ -142,10 +175,15 @@ public final class Actions {
         boolean pdfByName = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
         background.run(() -> CaseOpening.read(file, pdfByName), opened -> {
             boolean pdf = pdfByName || opened.fromPdf();
+            if (opened.problems().isEmpty() && course != null && CourseReader.claimsToBeCourse(opened.caseJson())) {
+                openCourse(file, pdf, opened.caseJson());
+                return;
+            }
             if (opened.problems().isEmpty()) {
                 Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
                 if (state.isPresent()) {
                     // A case read out of a PDF belongs to no case file: Save asks where.
+                    endCourse();
                     session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
                     remember(file);
                     markRunning();
@@ -171,6 +209,19 @@ public final class Actions {
         });
     }
 
+    /** Opens a course file (or the course inside a course PDF, which then belongs to no file). */
+    private void openCourse(Path file, boolean pdf, byte[] json) {
+        List<String> problems = course.open(json, pdf ? Optional.empty() : Optional.of(file));
+        if (!problems.isEmpty()) {
+            status.set("Not opened: " + file.getFileName());
+            shell.showProblems(file.getFileName() + " was not opened; the form is unchanged", problems);
+            return;
+        }
+        remember(file);
+        markRunning();
+        status.set("Opened the course " + file.getFileName() + (pdf ? " (the course inside the PDF)" : ""));
+    }
+
     public void openRecent(Path file) {
         if (mayReplace()) {
             openFile(file);
@@ -178,6 +229,10 @@ public final class Actions {
     }
 
     public void save() {
+        if (inCourse()) {
+            saveCourse(false);
+            return;
+        }
         Optional<Path> doc = session.documentProperty().get();
         if (doc.isPresent()) {
             write(doc.get(), () -> { });
@@ -187,6 +242,10 @@ public final class Actions {
     }
 
     public void saveAs() {
+        if (inCourse()) {
+            saveCourse(true);
+            return;
+        }
         chooseTarget().ifPresent(p -> write(p, () -> { }));
     }
 
@@ -205,6 +264,72 @@ public final class Actions {
             shell.showProblems("The case was not saved", List.of(oneLine(e)));
             return false;
         }
+    }
+
+    /**
+     * Saves the course (stasis-course/1, written atomically) on the background thread; refused, with the reason,
+     * while the assessment in the form has problems, so a course is never saved without what the form shows.
+     */
+    public void saveCourse(boolean askWhere) {
+        Optional<byte[]> json = course.fileBytes();
+        if (json.isEmpty()) {
+            status.set("Course NOT saved");
+            shell.showProblems("The course was not saved", List.of(course.messageProperty().get()));
+            return;
+        }
+        Optional<Path> target = askWhere ? Optional.empty() : course.documentProperty().get();
+        target = target.or(this::chooseCourseTarget);
+        if (target.isEmpty()) {
+            return;
+        }
+        Path to = target.get();
+        status.set("Saving " + to.getFileName() + "…");
+        background.run(() -> {
+            Storage.writeDocument(to, json.get());
+            return to;
+        }, saved -> afterCourseSave(saved, json.get()), e -> {
+            status.set("Course NOT saved: " + oneLine(e));
+            shell.showProblems("The course was not saved", List.of(oneLine(e)));
+        });
+    }
+
+    private boolean saveCourseAndWait() {
+        Optional<byte[]> json = course.fileBytes();
+        if (json.isEmpty()) {
+            shell.showProblems("The course was not saved", List.of(course.messageProperty().get()));
+            return false;
+        }
+        Optional<Path> target = course.documentProperty().get().or(this::chooseCourseTarget);
+        if (target.isEmpty()) {
+            return false;
+        }
+        try {
+            Storage.writeDocument(target.get(), json.get()); // the user is waiting for this one write
+            afterCourseSave(target.get(), json.get());
+            return true;
+        } catch (IOException e) {
+            shell.showProblems("The course was not saved", List.of(oneLine(e)));
+            return false;
+        }
+    }
+
+    private Optional<Path> chooseCourseTarget() {
+        String suggested = session.entry().field("patient.label").textProperty().get()
+                .replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "");
+        return shell.chooseCaseTarget((suggested.isEmpty() ? "course" : suggested + "-course") + ".json",
+                course.documentProperty().get()).map(p -> withExtension(p, ".json"));
+    }
+
+    private void afterCourseSave(Path saved, byte[] json) {
+        course.saved(saved, json);
+        remember(saved);
+        markRunning();
+        autosaver.forget();
+        background.run(() -> {
+            drafts.discardDraft(); // the course file holds it now
+            return saved;
+        }, d -> { }, e -> { });
+        status.set("Saved the course " + saved.getFileName());
     }
 
     private Optional<Path> chooseTarget() {
@@ -333,7 +458,7 @@ public final class Actions {
 
     /** Records (in the session marker) which file the form belongs to, so a restored draft knows it. */
     void markRunning() {
-        Optional<Path> doc = session.documentProperty().get();
+        Optional<Path> doc = inCourse() ? course.documentProperty().get() : session.documentProperty().get();
         background.run(() -> {
             drafts.markRunning(doc);
             return doc;
@@ -351,7 +476,10 @@ public final class Actions {
         boolean restored = false;
         for (int i = 0; i < found.size() && !restored; i++) {
             DraftStore.Draft d = found.get(i);
-            Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
+            boolean courseDraft = course != null && CourseModel.isCourseDraft(d.caseJson());
+            Optional<FormState> state = courseDraft
+                    ? (course.readable(d.caseJson()) ? Optional.of(FormState.BLANK) : Optional.empty())
+                    : FormJson.read(d.caseJson(), preferences.get().units());
             if (state.isEmpty()) {
                 try {
                     notes.add("A draft could not be read back; it was kept as " + drafts.setAside(d));
@@ -360,11 +488,15 @@ public final class Actions {
                 }
                 continue;
             }
-            String detail = "A draft saved at " + WHEN.format(d.savedAt().atZone(zone))
+            String detail = (courseDraft ? "A draft of a course of treatment saved at " : "A draft saved at ") + WHEN.format(d.savedAt().atZone(zone))
                     + d.document().map(p -> " for " + p.getFileName()).orElse(" (never saved to a file)")
                     + " was found" + (found.size() > 1 ? " (" + (i + 1) + " of " + found.size() + ")." : ".");
             if (shell.offerRestore(detail)) {
-                session.restore(state.get(), d.document());
+                if (courseDraft) {
+                    course.restore(d.caseJson());
+                } else {
+                    session.restore(state.get(), d.document());
+                }
                 restored = true;
                 int left = found.size() - i - 1;
                 notes.add(0, "Draft restored: check it, then save" + (left == 0 ? ""

@@ -27,6 +27,8 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.stasissheet.ui.course.CourseModel;
+import org.stasissheet.ui.course.CourseView;
 import org.stasissheet.ui.labs.LabImportWindow;
 import org.stasissheet.ui.labs.LabLanding;
 import org.stasissheet.ui.draft.Autosaver;
@@ -59,6 +61,8 @@ public final class MainWindow {
     private final FormSettings settings;
     private final Shell shell;
     private final LabLanding labLanding;
+    private final CourseModel course;
+    private final javafx.scene.control.TabPane sideTabs = new javafx.scene.control.TabPane();
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -73,17 +77,29 @@ public final class MainWindow {
         labLanding = new LabLanding(entry);
         RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
-        autosaver = new Autosaver(drafts, background, entry.editsProperty(), session::caseJson,
-                settings.autosaveDelay(), settings.clock());
+        course = new CourseModel(session);
+        // a course's draft holds the whole course besides the form, so a crash loses neither
+        autosaver = new Autosaver(drafts, background, entry.editsProperty(),
+                () -> course.active() ? course.draftJson() : session.caseJson(), settings.autosaveDelay(),
+                settings.clock());
+        course.changesProperty().addListener(o -> autosaver.saveNow());
         actions = new Actions(session, shell, background, drafts, autosaver, preferenceStore, preferences,
                 settings.rules(), settings.clock());
         actions.ruleFolderProperty().set(first.folder());
+        actions.attachCourse(course);
         entry.unitSystemProperty().bind(Bindings.createObjectBinding(() -> preferences.get().units(), preferences));
 
         EntryView entryView = new EntryView(entry, () -> OffsetDateTime.now(settings.clock())
                 .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
         SheetView sheetView = new SheetView(session.sheet());
-        SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
+        javafx.scene.control.Tab sheetTab = new javafx.scene.control.Tab("Worksheet", sheetView.node());
+        javafx.scene.control.Tab courseTab = new javafx.scene.control.Tab("Course of treatment",
+                new CourseView(course).node());
+        courseTab.setId("tab-course");
+        sideTabs.getTabs().addAll(sheetTab, courseTab);
+        sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        sideTabs.setId("side-tabs");
+        SplitPane sides = new SplitPane(entryView.node(), sideTabs);
         sides.setOrientation(Orientation.HORIZONTAL);
         sides.setDividerPositions(0.42);
 
@@ -156,6 +172,16 @@ public final class MainWindow {
         return background;
     }
 
+    /** The course of treatment the form may hold. */
+    public CourseModel course() {
+        return course;
+    }
+
+    /** Brings the course panel to the front. */
+    public void showCourse() {
+        sideTabs.getSelectionModel().select(1);
+    }
+
     public ObjectProperty<Preferences> preferences() {
         return preferences;
     }
@@ -191,7 +217,7 @@ public final class MainWindow {
         Menu file = new Menu("_Case");
         file.setId("menu-case");
         MenuItem newCase = item("_New case", "Shortcut+N", "action-new", actions::newCase);
-        MenuItem open = item("_Open case or worksheet PDF…", "Shortcut+O", "action-open", actions::open);
+        MenuItem open = item("_Open case, course or PDF…", "Shortcut+O", "action-open", actions::open);
         Menu recent = new Menu("Open _recent");
         recent.setId("menu-recent");
         recent.setOnShowing(e -> fillRecent(recent));
@@ -267,7 +293,11 @@ public final class MainWindow {
                 () -> org.stasissheet.ui.register.RegisterLauncher.open(settings, background,
                         actions::report)));
 
-        MenuBar bar = new MenuBar(file, sheet, rules, register, view);
+        Menu courseMenu = new Menu("C_ourse");
+        courseMenu.setId("menu-course");
+        courseMenu.getItems().add(item("Show the _course of treatment", "Shortcut+U", "action-show-course",
+                this::showCourse));
+        MenuBar bar = new MenuBar(file, sheet, courseMenu, rules, register, view);
         bar.setId("menu-bar");
         return bar;
     }
