@@ -156,7 +156,8 @@ public final class CourseText {
         if (p instanceof Procedure.PlasmaExchange x) {
             String amount = x.plasmaVolumes().map(v -> Numbers.plain(v) + (v == 1 ? " plasma volume" : " plasma volumes"))
                     .orElseGet(() -> x.volume().orElseThrow() + " removed" + r.plasmaVolumes()
-                            .map(v -> " (about " + Numbers.rounded(v, 2) + " plasma volumes)").orElse(""));
+                            .map(v -> " (about " + Numbers.rounded(v, 2)
+                            + (Numbers.rounded(v, 2).equals("1") ? " plasma volume)" : " plasma volumes)")).orElse(""));
             return "plasma exchange, " + amount + ", replaced with " + x.replacement().words();
         }
         if (p instanceof Procedure.Leukapheresis l) {

@@ -62,6 +62,7 @@ public final class MainWindow {
     private final Shell shell;
     private final LabLanding labLanding;
     private final CourseModel course;
+    private final CourseView courseView;
     private final javafx.scene.control.TabPane sideTabs = new javafx.scene.control.TabPane();
 
     private MainWindow(Stage stage, FormSettings settings) {
@@ -92,9 +93,10 @@ public final class MainWindow {
         EntryView entryView = new EntryView(entry, () -> OffsetDateTime.now(settings.clock())
                 .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
         SheetView sheetView = new SheetView(session.sheet());
+        courseView = new CourseView(course);
         javafx.scene.control.Tab sheetTab = new javafx.scene.control.Tab("Worksheet", sheetView.node());
         javafx.scene.control.Tab courseTab = new javafx.scene.control.Tab("Course of treatment",
-                new CourseView(course).node());
+                courseView.node());
         courseTab.setId("tab-course");
         sideTabs.getTabs().addAll(sheetTab, courseTab);
         sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
@@ -175,6 +177,11 @@ public final class MainWindow {
     /** The course of treatment the form may hold. */
     public CourseModel course() {
         return course;
+    }
+
+    /** The course panel (charts and table). */
+    public CourseView courseView() {
+        return courseView;
     }
 
     /** Brings the course panel to the front. */

@@ -1,0 +1,351 @@
+package org.stasissheet.ui.course;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import javafx.scene.chart.LineChart;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TextField;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.course.AnalyteCheck;
+import org.stasissheet.course.Course;
+import org.stasissheet.course.CourseAssessor;
+import org.stasissheet.course.CourseReader;
+import org.stasissheet.course.CourseReport;
+import org.stasissheet.course.CourseWriter;
+import org.stasissheet.course.Projected;
+import org.stasissheet.files.RuleSources;
+import org.stasissheet.intake.CaseWriter;
+import org.stasissheet.measure.Analyte;
+import org.stasissheet.report.CourseText;
+import org.stasissheet.rules.LoadResult;
+import org.stasissheet.rules.RuleSet;
+import org.stasissheet.ui.FormHarness;
+import org.stasissheet.ui.ScriptedShell;
+import org.stasissheet.ui.app.MainWindow;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * The course of treatment in the form, driven headless: the published IgA myeloma course of Gertz MA, Blood
+ * 2018;132(13):1379–1385 (13.6 cP, 3479 mL removed, 3.6 cP; 3535 mL removed, 1.8 cP) is built through the form and
+ * checked against the course core's own report of the same course file ({@code courses/gertz-2018-iga.json}, as
+ * {@code course.GertzCourseTest} assesses it) and against the values worked by hand there.
+ */
+@ExtendWith(ApplicationExtension.class)
+class CourseFormTest {
+    private static final RuleSet RULES = ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
+
+    @TempDir
+    Path data;
+
+    final ScriptedShell shell = new ScriptedShell();
+    MainWindow window;
+
+    @Start
+    void start(Stage stage) {
+        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+    }
+
+    private static byte[] gertzBytes() throws IOException {
+        try (InputStream in = CourseFormTest.class.getResourceAsStream("/courses/gertz-2018-iga.json")) {
+            return in.readAllBytes();
+        }
+    }
+
+    private static Course gertz() throws IOException {
+        return ((CourseReader.Accepted) CourseReader.read(gertzBytes())).course();
+    }
+
+    private CourseModel course() {
+        return window.course();
+    }
+
+    private void recompute() throws Exception {
+        FormHarness.fx(() -> window.session().recomputeNow());
+    }
+
+    /** Types the measured values of one Gertz assessment into the form (what the published case gives). */
+    private void typeGertzLabs(String viscosity) throws Exception {
+        FormHarness.fx(() -> {
+            var e = window.session().entry();
+            e.field("labs.serumViscosity").textProperty().set(viscosity);
+            e.field("labs.serumViscosity").unitProperty().set("cP");
+            e.field("labs.serumViscosity.temperature").textProperty().set("37");
+            e.field("labs.serumViscosity.temperature").unitProperty().set("Cel");
+            e.field("labs.hemoglobin").textProperty().set("7.9");
+            e.field("labs.hemoglobin").unitProperty().set("g/dL");
+            e.field("labs.hematocrit").textProperty().set("23.7");
+            e.field("labs.hematocrit").unitProperty().set("%");
+        });
+        recompute();
+    }
+
+    /** Opens the first Gertz assessment as a single case file. */
+    private void openFirstGertzCase() throws Exception {
+        Path file = data.resolve("gertz-first.json");
+        Files.writeString(file, CaseWriter.write(gertz().caseAt(0)));
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        assertFalse(course().active(), "a case file opens as a case");
+    }
+
+    private Path openGertzCourseFile() throws Exception {
+        Path file = data.resolve("gertz-course.json");
+        Files.write(file, gertzBytes());
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        return file;
+    }
+
+    @Test
+    @DisplayName("the Gertz course built in the form (case → course, two exchanges, two later assessments) gives "
+            + "the core's table row for row: 3.51 and 2.14 cP right after, 7.70 and 2.90 cP after redistribution, "
+            + "no review flag")
+    void addAssessmentsAndProcedures() throws Exception {
+        openFirstGertzCase();
+        boolean[] ok = new boolean[6];
+        FormHarness.fx(() -> ok[0] = course().start(""));
+        assertTrue(ok[0], course().messageProperty().get());
+        FormHarness.fx(() -> ok[1] = course().addProcedure(new ProcedureFields(ProcedureFields.Kind.PLASMA_EXCHANGE,
+                "2026-06-11T10:00:00+02:00", "", "3479", "mL", "albumin", "")));
+        assertTrue(ok[1], course().messageProperty().get());
+        FormHarness.fx(() -> ok[2] = course().addAssessment("2026-06-11T14:00:00+02:00"));
+        assertTrue(ok[2], course().messageProperty().get());
+        assertEquals("2026-06-11T14:00+02:00",
+                window.session().entry().field("assessedAt").textProperty().get().replace(":00+", "+"),
+                "the form shows the new assessment with its own time");
+        assertEquals("", window.session().entry().field("labs.serumViscosity").textProperty().get(),
+                "no earlier value is carried into the later assessment");
+        assertEquals("Published case (Gertz 2018), no identifiers",
+                window.session().entry().field("patient.label").textProperty().get(), "the patient stays");
+        typeGertzLabs("3.6");
+        FormHarness.fx(() -> ok[3] = course().addProcedure(new ProcedureFields(ProcedureFields.Kind.PLASMA_EXCHANGE,
+                "2026-06-12T10:00:00+02:00", "", "3535", "mL", "albumin", "")));
+        assertTrue(ok[3], course().messageProperty().get());
+        FormHarness.fx(() -> ok[4] = course().addAssessment("2026-06-12T14:00:00+02:00"));
+        assertTrue(ok[4], course().messageProperty().get());
+        typeGertzLabs("1.8");
+
+        CourseReport shown = course().reportProperty().get().orElseThrow();
+        assertEquals(3, shown.course().assessments().size());
+        assertEquals(2, shown.course().procedures().size());
+        // the core's own report of the published course file: the same rows, cell for cell
+        CourseReport core = CourseAssessor.assess(gertz(), RULES);
+        CourseView view = viewOf(window);
+        List<CourseRows.ReviewRow> table = List.copyOf(view.table().getItems());
+        assertEquals(CourseRows.rows(core), table);
+        assertEquals(2, table.size(), "one row per exchange (only serum viscosity was measured)");
+        // Gertz course, worked by hand in GertzCourseTest: 3.51 cP right after, 7.70 cP after redistribution,
+        // measured 3.6 cP (+2.5 %); second exchange 2.14 / 2.90 cP, measured 1.8 cP
+        Projected first = check(shown, 0).projected().known().orElseThrow();
+        assertEquals(3.51, first.low(), 0.01);
+        assertEquals(7.70, first.high(), 0.01);
+        assertTrue(table.get(0).projectedLow().contains("3.51 cP"), table.get(0).toString());
+        assertTrue(table.get(0).measuredNext().startsWith("3.6 cP"), table.get(0).toString());
+        double difference = check(shown, 0).next().orElseThrow().differenceFromLowPercent().orElseThrow();
+        assertEquals(2.5, difference, 0.5, "(3.6 − 3.51) / 3.51, GertzCourseTest");
+        assertTrue(table.get(0).difference().startsWith(CourseText.percent(difference) + " against right after"),
+                table.get(0).toString());
+        assertTrue(table.get(1).projectedLow().contains("2.14 cP"), table.get(1).toString());
+        assertTrue(table.get(1).projectedHigh().contains("2.9 cP"), table.get(1).toString());
+        assertEquals("no", table.get(0).review());
+        assertEquals("no", table.get(1).review());
+
+        // one chart (serum viscosity, the only followed value measured): measured, both projections, procedures
+        List<LineChart<Number, Number>> charts = view.charts();
+        assertEquals(1, charts.size());
+        LineChart<Number, Number> sv = charts.get(0);
+        assertEquals(4, sv.getData().size());
+        assertEquals(List.of(3, 2, 2, 2), sv.getData().stream().map(s -> s.getData().size()).toList(),
+                "3 measured, 2 projected right after, 2 after redistribution, 2 procedures");
+        assertEquals(13.6, sv.getData().get(0).getData().get(0).getYValue().doubleValue(), 1e-9);
+        assertEquals(2.0, sv.getData().get(3).getData().get(0).getXValue().doubleValue(), 1e-9,
+                "the first exchange 2 hours after the first assessment, on the time axis");
+        assertTrue(course().dirtyProperty().get(), "not saved yet");
+    }
+
+    @Test
+    @DisplayName("a plasma exchange with neither plasma volumes nor a volume is refused by the course reader's "
+            + "rule, naming the field; an out-of-range amount names the field and the value; nothing is added")
+    void procedureRefused(FxRobot robot) throws Exception {
+        openFirstGertzCase();
+        FormHarness.fx(() -> {
+            window.showCourse();
+            course().start("");
+        });
+        assertTrue(course().active());
+        TextField time = robot.lookup("#course-procedure-time").query();
+        FormHarness.fx(() -> time.setText("2026-06-11T10:00:00+02:00"));
+        Button add = robot.lookup("#course-add-procedure").query();
+        FormHarness.scrollTo(add);
+        robot.clickOn(add);
+        WaitForAsyncUtils.waitForFxEvents();
+        String message = ((Label) robot.lookup("#course-message").query()).getText();
+        assertTrue(message.contains("New procedure: a plasma exchange needs plasmaVolumes (0.5–2.0) or volume"),
+                message);
+        assertTrue(message.contains("neither is given"), message);
+        assertEquals(0, course().courseProperty().get().orElseThrow().procedures().size());
+        assertEquals("2026-06-11T10:00:00+02:00", time.getText(), "what was typed stays");
+
+        TextField volumes = robot.lookup("#course-procedure-plasma-volumes").query();
+        FormHarness.fx(() -> volumes.setText("3"));
+        robot.clickOn(add);
+        WaitForAsyncUtils.waitForFxEvents();
+        message = ((Label) robot.lookup("#course-message").query()).getText();
+        assertTrue(message.contains("Plasma volumes: 3 plasma volumes is outside 0.5–2"), message);
+        assertEquals(0, course().courseProperty().get().orElseThrow().procedures().size());
+
+        FormHarness.fx(() -> volumes.setText("1.0"));
+        robot.clickOn(add);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, course().courseProperty().get().orElseThrow().procedures().size());
+        assertEquals("", time.getText(), "the fields are cleared once the procedure is added");
+    }
+
+    @Test
+    @DisplayName("a case without a time asks for one before it becomes a course; a later assessment needs a time")
+    void timesAreAskedFor() throws Exception {
+        FormHarness.fx(() -> window.actions().newCase());
+        boolean[] ok = new boolean[3];
+        FormHarness.fx(() -> ok[0] = course().start(""));
+        assertFalse(ok[0]);
+        assertTrue(course().messageProperty().get().startsWith("Time of the first assessment: missing"),
+                course().messageProperty().get());
+        FormHarness.fx(() -> ok[1] = course().start("yesterday"));
+        assertFalse(ok[1]);
+        assertTrue(course().messageProperty().get().contains("\"yesterday\" is not an ISO-8601 time"),
+                course().messageProperty().get());
+        FormHarness.fx(() -> ok[2] = course().start("2026-06-11T08:00+02:00"));
+        assertTrue(ok[2], course().messageProperty().get());
+        assertEquals("2026-06-11T08:00+02:00", window.session().entry().field("assessedAt").textProperty().get());
+        FormHarness.fx(() -> ok[0] = course().addAssessment(" "));
+        assertFalse(ok[0]);
+        assertTrue(course().messageProperty().get().startsWith("Time of the new assessment: missing"));
+        assertEquals(1, course().courseProperty().get().orElseThrow().assessments().size());
+    }
+
+    @Test
+    @DisplayName("save writes the course file atomically; reopened, it is the same course (file bytes and the "
+            + "course report) and the form shows its latest assessment")
+    void saveAndReopen() throws Exception {
+        openGertzCourseFile();
+        assertTrue(course().active());
+        assertFalse(course().dirtyProperty().get(), "as opened");
+        assertEquals("1.8", window.session().entry().field("labs.serumViscosity").textProperty().get(),
+                "the form shows the latest assessment");
+        FormHarness.fx(() -> course().addProcedure(new ProcedureFields(ProcedureFields.Kind.PLASMA_EXCHANGE,
+                "2026-06-13T10:00:00+02:00", "1.0", "", "mL", "albumin", "")));
+        assertTrue(course().dirtyProperty().get());
+        Path target = data.resolve("saved").resolve("gertz-after");
+        Files.createDirectories(target.getParent());
+        shell.files.add(target);
+        FormHarness.fx(() -> window.actions().saveAs());
+        FormHarness.settle(window);
+        Path written = data.resolve("saved").resolve("gertz-after.json");
+        assertTrue(Files.exists(written), shell.asked.toString());
+        byte[] bytes = Files.readAllBytes(written);
+        Course saved = course().courseProperty().get().orElseThrow();
+        assertEquals(CourseWriter.write(saved), new String(bytes, StandardCharsets.UTF_8));
+        assertFalse(course().dirtyProperty().get());
+        try (var left = Files.list(written.getParent())) {
+            assertEquals(List.of(written), left.toList(), "no temporary file is left beside it");
+        }
+
+        FormHarness.fx(() -> window.actions().newCase());
+        assertFalse(course().active());
+        FormHarness.fx(() -> window.actions().openFile(written));
+        FormHarness.settle(window);
+        Course reopened = course().courseProperty().get().orElseThrow();
+        assertEquals(saved, reopened);
+        assertArrayEquals(bytes, CourseWriter.write(reopened).getBytes(StandardCharsets.UTF_8));
+        assertEquals(CourseText.render(CourseAssessor.assess(saved, RULES)),
+                CourseText.render(course().reportProperty().get().orElseThrow()));
+        assertEquals(3, reopened.procedures().size());
+        assertEquals(2, course().editing(), "the form shows the latest of the 3 assessments");
+        assertFalse(course().dirtyProperty().get());
+        assertEquals(java.util.Optional.of(written), course().documentProperty().get());
+    }
+
+    @Test
+    @DisplayName("after a crash the course and the form as typed (a mistake included) are offered and restored; "
+            + "a course with a mistake in the form is not saved")
+    void recoverAfterCrash() throws Exception {
+        openGertzCourseFile();
+        FormHarness.fx(() -> {
+            course().addProcedure(new ProcedureFields(ProcedureFields.Kind.PLASMA_EXCHANGE,
+                    "2026-06-13T10:00:00+02:00", "", "3.5", "L", "albumin", ""));
+            course().addAssessment("2026-06-13T14:00:00+02:00");
+        });
+        Course before = course().courseProperty().get().orElseThrow();
+        FormHarness.fx(() -> window.session().entry().field("labs.serumViscosity").textProperty().set("two"));
+        recompute();
+        assertFalse(course().formCompleteProperty().get());
+        Path draft = window.drafts().draftFile();
+        FormHarness.waitUntil(() -> read(draft).contains(CourseModel.DRAFT_FORMAT) && read(draft).contains("two"));
+        FormHarness.crash(window);
+
+        ScriptedShell next = new ScriptedShell();
+        next.restore = true;
+        MainWindow again = FormHarness.open(FormHarness.settings(data, next));
+        assertTrue(next.asked.stream().anyMatch(q -> q.startsWith("restore: A draft of a course")), next.asked.toString());
+        CourseModel restored = again.course();
+        assertTrue(restored.active());
+        assertEquals(CourseWriter.write(before), CourseWriter.write(restored.courseProperty().get().orElseThrow()));
+        assertEquals("two", again.session().entry().field("labs.serumViscosity").textProperty().get());
+        assertEquals(3, restored.editing(), "the form shows the assessment it showed before the crash");
+        assertTrue(restored.dirtyProperty().get(), "a restored course is not saved anywhere yet");
+        assertFalse(restored.formCompleteProperty().get());
+
+        next.files.add(data.resolve("never.json"));
+        FormHarness.fx(() -> again.actions().save());
+        FormHarness.settle(again);
+        assertFalse(Files.exists(data.resolve("never.json")));
+        assertTrue(next.asked.stream().anyMatch(q -> q.startsWith("problems: The course was not saved")),
+                next.asked.toString());
+        FormHarness.fx(() -> again.stage().hide());
+    }
+
+    @Test
+    @DisplayName("the course panel shows the standing caution and the course's own")
+    void caution(FxRobot robot) throws Exception {
+        FormHarness.fx(() -> window.showCourse());
+        Label caution = robot.lookup("#course-caution").query();
+        assertTrue(caution.isVisible());
+        assertTrue(caution.getText().contains("never replaces, clinical judgement, local protocols and licensed "
+                + "practice"), caution.getText());
+        assertTrue(caution.getText().contains(CourseText.COURSE_CAUTION));
+    }
+
+    private static AnalyteCheck check(CourseReport r, int procedure) {
+        return r.procedures().get(procedure).checks().stream().filter(c -> c.analyte() == Analyte.SERUM_VISCOSITY)
+                .findFirst().orElseThrow();
+    }
+
+    private static CourseView viewOf(MainWindow w) {
+        return w.courseView();
+    }
+
+    private static String read(Path p) {
+        try {
+            return Files.readString(p);
+        } catch (IOException e) {
+            return "";
+        }
+    }
+}
