@@ -101,6 +101,7 @@ public final class MainWindow {
         sideTabs.getTabs().addAll(sheetTab, courseTab);
         sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("side-tabs");
+        sideTabs.setAccessibleText("Worksheet or course of treatment");
         SplitPane sides = new SplitPane(entryView.node(), sideTabs);
         sides.setOrientation(Orientation.HORIZONTAL);
         sides.setDividerPositions(0.42);
