@@ -122,10 +122,12 @@ public final class MainWindow {
         preferences.addListener((o, was, now) -> applyLook(scene, now));
         applyLook(scene, preferences.get());
         stage.setScene(scene);
-        stage.titleProperty().bind(Bindings.createStringBinding(() -> "Stasis Sheet — "
-                        + session.documentProperty().get().map(p -> p.getFileName().toString()).orElse("case not saved to a file")
-                        + (session.dirtyProperty().get() ? " • unsaved changes" : ""),
-                session.documentProperty(), session.dirtyProperty()));
+        stage.titleProperty().bind(Bindings.createStringBinding(() -> "Stasis Sheet — " + (course.active()
+                        ? "course " + course.documentName() : session.documentProperty().get()
+                        .map(p -> p.getFileName().toString()).orElse("case not saved to a file"))
+                        + (unsaved() ? " • unsaved changes" : ""),
+                session.documentProperty(), session.dirtyProperty(), course.courseProperty(),
+                course.documentProperty(), course.dirtyProperty()));
         stage.setOnCloseRequest(e -> {
             if (!actions.closeRequested()) {
                 e.consume();
@@ -335,14 +337,19 @@ public final class MainWindow {
         return i;
     }
 
+    /** Whether the document the window holds (the course, or else the case) has unsaved changes. */
+    private boolean unsaved() {
+        return course.active() ? course.dirtyProperty().get() : session.dirtyProperty().get();
+    }
+
     private HBox statusBar() {
         Label saved = new Label();
         saved.setId("autosave-status");
         saved.textProperty().bind(autosaver.statusProperty());
         Label dirty = new Label();
         dirty.setId("dirty-status");
-        dirty.textProperty().bind(Bindings.when(session.dirtyProperty()).then("UNSAVED CHANGES")
-                .otherwise("saved"));
+        dirty.textProperty().bind(Bindings.createStringBinding(() -> unsaved() ? "UNSAVED CHANGES" : "saved",
+                session.dirtyProperty(), course.courseProperty(), course.dirtyProperty()));
         Label message = new Label();
         message.setId("action-status");
         message.textProperty().bind(actions.statusProperty());

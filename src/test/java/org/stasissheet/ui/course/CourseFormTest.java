@@ -252,6 +252,7 @@ class CourseFormTest {
         FormHarness.fx(() -> course().addProcedure(new ProcedureFields(ProcedureFields.Kind.PLASMA_EXCHANGE,
                 "2026-06-13T10:00:00+02:00", "1.0", "", "mL", "albumin", "")));
         assertTrue(course().dirtyProperty().get());
+        assertEquals("Stasis Sheet — course gertz-course.json • unsaved changes", window.stage().getTitle());
         Path target = data.resolve("saved").resolve("gertz-after");
         Files.createDirectories(target.getParent());
         shell.files.add(target);
@@ -263,6 +264,7 @@ class CourseFormTest {
         Course saved = course().courseProperty().get().orElseThrow();
         assertEquals(CourseWriter.write(saved), new String(bytes, StandardCharsets.UTF_8));
         assertFalse(course().dirtyProperty().get());
+        assertEquals("Stasis Sheet — course gertz-after.json", window.stage().getTitle());
         try (var left = Files.list(written.getParent())) {
             assertEquals(List.of(written), left.toList(), "no temporary file is left beside it");
         }
@@ -319,6 +321,22 @@ class CourseFormTest {
         assertTrue(next.asked.stream().anyMatch(q -> q.startsWith("problems: The course was not saved")),
                 next.asked.toString());
         FormHarness.fx(() -> again.stage().hide());
+    }
+
+    @Test
+    @DisplayName("a course PDF opens as its embedded course, tied to no file (Save asks where)")
+    void openCoursePdf() throws Exception {
+        Course c = gertz();
+        byte[] pdf = org.stasissheet.report.CoursePdf.render(CourseAssessor.assess(c, RULES),
+                org.stasissheet.report.PdfOptions.defaults("test"),
+                java.time.OffsetDateTime.parse("2026-06-12T15:00:00+02:00"), gertzBytes());
+        Path file = data.resolve("gertz-course.pdf");
+        Files.write(file, pdf);
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        assertTrue(course().active(), shell.asked + " " + window.actions().statusProperty().get());
+        assertEquals(CourseWriter.write(c), CourseWriter.write(course().courseProperty().get().orElseThrow()));
+        assertTrue(course().documentProperty().get().isEmpty(), "Save does not overwrite the PDF");
     }
 
     @Test
