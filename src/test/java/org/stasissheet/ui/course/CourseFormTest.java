@@ -132,6 +132,9 @@ class CourseFormTest {
                 "the form shows the new assessment with its own time");
         assertEquals("", window.session().entry().field("labs.serumViscosity").textProperty().get(),
                 "no earlier value is carried into the later assessment");
+        assertEquals("", window.session().entry().field("findings.mucosalBleeding").textProperty().get(),
+                "no earlier sign either: it is examined again (the first assessment recorded bleeding)");
+        assertEquals("not-examined", window.session().entry().field("findings.retinopathy").textProperty().get());
         assertEquals("Published case (Gertz 2018), no identifiers",
                 window.session().entry().field("patient.label").textProperty().get(), "the patient stays");
         typeGertzLabs("3.6");
