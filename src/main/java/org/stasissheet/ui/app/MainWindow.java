@@ -80,10 +80,14 @@ public final class MainWindow {
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
         course = new CourseModel(session);
         // a course's draft holds the whole course besides the form, so a crash loses neither
-        autosaver = new Autosaver(drafts, background, entry.editsProperty(),
+        // the pause restarts on a typed edit and on a change of the course (a procedure added); a property, not a
+        // lazy binding, so every change is heard
+        javafx.beans.property.IntegerProperty draftChanges = new javafx.beans.property.SimpleIntegerProperty();
+        entry.editsProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
+        course.changesProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
+        autosaver = new Autosaver(drafts, background, draftChanges,
                 () -> course.active() ? course.draftJson() : session.caseJson(), settings.autosaveDelay(),
                 settings.clock());
-        course.changesProperty().addListener(o -> autosaver.saveNow());
         actions = new Actions(session, shell, background, drafts, autosaver, preferenceStore, preferences,
                 settings.rules(), settings.clock());
         actions.ruleFolderProperty().set(first.folder());

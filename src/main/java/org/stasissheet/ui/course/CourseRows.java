@@ -28,7 +28,9 @@ public final class CourseRows {
      * One line of the table: one analyte around one procedure (or, for a procedure with nothing projected, the
      * procedure and why), every cell in words with its unit.
      *
-     * @param review "REVIEW" with what to check, "no" or "not yet measured"
+     * @param projectedLow  right after the exchange, or after a leukapheresis at the largest usual fall
+     * @param projectedHigh after redistribution, or at the smallest usual fall
+     * @param review        "REVIEW" with what to check, "no" or "not yet measured"
      */
     public record ReviewRow(String procedure, String analyte, String before, String projectedLow,
                             String projectedHigh, String measuredNext, String difference, String review) {
@@ -70,8 +72,9 @@ public final class CourseRows {
                 continue;
             }
             ProcedureReview r = report.procedures().get(reviewIndex++);
-            String procedure = "#" + n + " " + ReportTime.FORMAT.format(r.procedure().at()) + " "
-                    + CourseText.describe(r);
+            // short: the entries list above the table describes each procedure in full
+            String procedure = "#" + n + " " + r.procedure().kind().replace('-', ' ') + ", "
+                    + ReportTime.FORMAT.format(r.procedure().at());
             if (r.checks().isEmpty()) {
                 String why = r.notes().isEmpty() ? "nothing projected for this procedure" : r.notes().get(0);
                 rows.add(new ReviewRow(procedure, "—", "—", "—", "—", "—", why, "no"));
@@ -79,20 +82,15 @@ public final class CourseRows {
             }
             for (AnalyteCheck c : r.checks()) {
                 Analyte a = c.analyte();
-                String low = c.projected().known().map(p -> CourseText.names(p)[0] + " "
-                        + CourseText.amount(p.low(), a)).orElse("not projected: " + c.projected().whyUnknown()
-                        .orElse(""));
-                String high = c.projected().known().map(p -> CourseText.names(p)[1] + " "
-                        + CourseText.amount(p.high(), a)).orElse("—");
+                String low = c.projected().known().map(p -> CourseText.amount(p.low(), a))
+                        .orElse("not projected: " + c.projected().whyUnknown().orElse(""));
+                String high = c.projected().known().map(p -> CourseText.amount(p.high(), a)).orElse("—");
                 String next = c.next().map(m -> CourseText.amount(m.measured().value(), a) + " at "
                         + ReportTime.FORMAT.format(m.at())).orElse("none yet");
                 String difference = c.next().map(m -> {
                     List<String> parts = new ArrayList<>();
-                    String[] names = c.projected().known().map(CourseText::names).orElse(new String[] {"", ""});
-                    m.differenceFromLowPercent().ifPresent(d -> parts.add(CourseText.percent(d) + " against "
-                            + names[0]));
-                    m.differenceFromHighPercent().ifPresent(d -> parts.add(CourseText.percent(d) + " against "
-                            + names[1]));
+                    m.differenceFromLowPercent().ifPresent(d -> parts.add(CourseText.percent(d) + " against low"));
+                    m.differenceFromHighPercent().ifPresent(d -> parts.add(CourseText.percent(d) + " against high"));
                     return parts.isEmpty() ? "—" : String.join(", ", parts);
                 }).orElse("—");
                 String review = c.next().map(m -> m.review()

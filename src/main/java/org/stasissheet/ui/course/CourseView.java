@@ -69,22 +69,22 @@ public final class CourseView {
 
         VBox box = new VBox(10, caution, state, message, startRow(), assessmentRow(), procedureBox(),
                 heading("Entries (the form shows the one marked ▶)"), entries,
-                heading("Values over time"), charts,
+                heading("Values over time"), legend(), charts,
                 heading("Projected against measured"), table, reviewRule());
         box.setPadding(new Insets(8));
         box.getStyleClass().add("course-panel");
         table.setId("course-review-table");
         table.setAccessibleText("Projected against measured values per procedure");
-        table.setPrefHeight(220);
-        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        column("Procedure", CourseRows.ReviewRow::procedure);
-        column("Value", CourseRows.ReviewRow::analyte);
-        column("Before", CourseRows.ReviewRow::before);
-        column("Projected (low)", CourseRows.ReviewRow::projectedLow);
-        column("Projected (high)", CourseRows.ReviewRow::projectedHigh);
-        column("Measured next", CourseRows.ReviewRow::measuredNext);
-        column("Difference", CourseRows.ReviewRow::difference);
-        column("Review", CourseRows.ReviewRow::review);
+        table.setPrefHeight(420);
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_ALL_COLUMNS);
+        column("Procedure", 130, CourseRows.ReviewRow::procedure);
+        column("Value", 80, CourseRows.ReviewRow::analyte);
+        column("Before", 65, CourseRows.ReviewRow::before);
+        column("Low □", 75, CourseRows.ReviewRow::projectedLow);
+        column("High ○", 75, CourseRows.ReviewRow::projectedHigh);
+        column("Measured next", 110, CourseRows.ReviewRow::measuredNext);
+        column("Against projected", 110, CourseRows.ReviewRow::difference);
+        column("Review", 140, CourseRows.ReviewRow::review);
         charts.setId("course-charts");
         entries.setId("course-entries");
 
@@ -118,7 +118,12 @@ public final class CourseView {
         start.disableProperty().bind(Bindings.createBooleanBinding(() -> model.courseProperty().get().isPresent(),
                 model.courseProperty()));
         time.disableProperty().bind(start.disableProperty());
-        return row(new Label("Time of the first assessment (only when the case has none):"), time, start);
+        start.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        HBox row = row(new Label("First assessment at (only when the case has no time):"), time, start);
+        // once there is a course, the row has nothing to do
+        row.visibleProperty().bind(start.disableProperty().not());
+        row.managedProperty().bind(row.visibleProperty());
+        return row;
     }
 
     private Node assessmentRow() {
@@ -181,6 +186,16 @@ public final class CourseView {
         return pane;
     }
 
+    private static Node legend() {
+        Label l = new Label("● measured (joined by a line)   □ projected low: right after the exchange, or the largest "
+                + "usual fall after a leukapheresis   ○ projected high: after redistribution, or the smallest usual "
+                + "fall   ▲ procedure, on the time axis. Projections sit at the time of the next measurement. The "
+                + "table's Low and High columns are the same two values.");
+        l.setWrapText(true);
+        l.setId("course-legend");
+        return l;
+    }
+
     private Node reviewRule() {
         Label rule = new Label("Review rule: " + CourseText.REVIEW_RULE + ". Low and high: for an exchange, the value "
                 + "right after it and after redistribution; for a leukapheresis, the largest and the smallest usual "
@@ -209,14 +224,18 @@ public final class CourseView {
                         + "  assessment: " + VerdictWords.hyperviscosity(w.hyperviscosity()) + "; " + VerdictWords.leukostasis(w.leukostasis());
                 int index = sheet;
                 Button edit = button("course-edit-" + index, "Show in the form", () -> model.edit(index));
+                edit.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
                 Label line = new Label(text);
                 line.setWrapText(true);
-                entries.getChildren().add(row(line, edit));
+                HBox.setHgrow(line, javafx.scene.layout.Priority.ALWAYS);
+                entries.getChildren().add(row(edit, line));
                 sheet++;
             } else {
                 text = "   #" + n + " " + ReportTime.FORMAT.format(e.at()) + "  "
                         + CourseText.describe(r.procedures().get(review++));
-                entries.getChildren().add(new Label(text));
+                Label line = new Label(text);
+                line.setWrapText(true);
+                entries.getChildren().add(line);
             }
         }
         table.getItems().setAll(CourseRows.rows(r));
@@ -239,6 +258,8 @@ public final class CourseView {
         chart.setPrefHeight(240);
         chart.getStyleClass().add("course-chart");
         chart.setAccessibleText("Trend of " + t.title());
+        // the legend below all charts names the marks by shape; the chart's own would show colours only
+        chart.setLegendVisible(false);
         add(chart, "measured ●", t.measured(), "course-measured");
         add(chart, "projected low □", t.projectedLow(), "course-projected-low");
         add(chart, "projected high ○", t.projectedHigh(), "course-projected-high");
@@ -246,29 +267,44 @@ public final class CourseView {
         return chart;
     }
 
+    /**
+     * Adds one series, even an empty one, so each kind keeps its series index and with it its shape in the style
+     * sheet ({@code series0} measured, {@code series1} low, {@code series2} high, {@code series3} procedures).
+     */
     private static void add(LineChart<Number, Number> chart, String name, List<CourseRows.Point> points,
                             String style) {
-        if (points.isEmpty()) {
-            return;
-        }
         XYChart.Series<Number, Number> s = new XYChart.Series<>();
         s.setName(name);
         for (CourseRows.Point p : points) {
             s.getData().add(new XYChart.Data<>(p.hours(), p.value()));
         }
         chart.getData().add(s);
-        // only the measured values are joined; projections and procedures are marks
-        s.getNode().getStyleClass().add(style + "-line");
         for (int i = 0; i < points.size(); i++) {
             Node mark = s.getData().get(i).getNode();
-            mark.getStyleClass().add(style);
             Tooltip.install(mark, new Tooltip(points.get(i).label()));
         }
     }
 
-    private void column(String title, java.util.function.Function<CourseRows.ReviewRow, String> cell) {
+    private void column(String title, double width, java.util.function.Function<CourseRows.ReviewRow, String> cell) {
         TableColumn<CourseRows.ReviewRow, String> c = new TableColumn<>(title);
+        c.setPrefWidth(width);
         c.setCellValueFactory(d -> new javafx.beans.property.ReadOnlyStringWrapper(cell.apply(d.getValue())));
+        // cells wrap rather than cut: a cut review reason or unit would hide what to check
+        c.setCellFactory(col -> new javafx.scene.control.TableCell<>() {
+            private final javafx.scene.text.Text text = new javafx.scene.text.Text();
+
+            {
+                text.wrappingWidthProperty().bind(col.widthProperty().subtract(8));
+                text.getStyleClass().add("course-cell-text");
+                setGraphic(text);
+            }
+
+            @Override
+            protected void updateItem(String item, boolean empty) {
+                super.updateItem(item, empty);
+                text.setText(empty || item == null ? "" : item);
+            }
+        });
         table.getColumns().add(c);
     }
 

@@ -163,7 +163,7 @@ class CourseFormTest {
         assertTrue(table.get(0).measuredNext().startsWith("3.6 cP"), table.get(0).toString());
         double difference = check(shown, 0).next().orElseThrow().differenceFromLowPercent().orElseThrow();
         assertEquals(2.5, difference, 0.5, "(3.6 − 3.51) / 3.51, GertzCourseTest");
-        assertTrue(table.get(0).difference().startsWith(CourseText.percent(difference) + " against right after"),
+        assertTrue(table.get(0).difference().startsWith(CourseText.percent(difference) + " against low"),
                 table.get(0).toString());
         assertTrue(table.get(1).projectedLow().contains("2.14 cP"), table.get(1).toString());
         assertTrue(table.get(1).projectedHigh().contains("2.9 cP"), table.get(1).toString());
