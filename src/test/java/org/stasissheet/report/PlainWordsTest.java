@@ -183,7 +183,8 @@ class PlainWordsTest {
     }
 
     @Test
-    @DisplayName("the course's text report and handoff note with its trend line speak plain clinical words")
+    @DisplayName("the course's text report, handoff note with its trend line and the form's course table and chart "
+            + "titles speak plain clinical words")
     void courseTextAndNote() throws IOException {
         List<String> problems = new ArrayList<>();
         int i = 0;
@@ -192,6 +193,15 @@ class PlainWordsTest {
             check(name + " text", CourseText.render(report), problems);
             check(name + " note", CourseText.note(report, true), problems);
             CourseText.trendLine(report).ifPresent(t -> check(name + " trend", t, problems));
+            StringBuilder form = new StringBuilder();
+            org.stasissheet.ui.course.CourseRows.rows(report).forEach(r -> form.append(String.join("\n",
+                    r.procedure(), r.analyte(), r.before(), r.projectedLow(), r.projectedHigh(), r.measuredNext(),
+                    r.difference(), r.review())).append('\n'));
+            org.stasissheet.ui.course.CourseRows.trends(report).forEach(t -> {
+                form.append(t.title()).append('\n');
+                t.procedures().forEach(p -> form.append(p.label()).append('\n'));
+            });
+            check(name + " form", form.toString(), problems);
         }
         assertEquals(List.of(), problems.stream().distinct().limit(40).toList());
     }
