@@ -377,7 +377,8 @@ public final class Actions {
      * Rendering and writing run on the background thread; the form stays usable meanwhile.
      */
     public void exportPdf() {
-        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        // in a course, the moment as the course assesses it (its tumor-lysis baseline), and that case embedded
+        Optional<Worksheet> sheet = inCourse() ? course.currentWorksheet() : session.completeWorksheetProperty().get();
         if (sheet.isEmpty()) {
             shell.showProblems("No PDF: the case has problems", List.of(
                     "Fix the entries marked PROBLEM first: a PDF is only made of a complete case."));
@@ -390,7 +391,8 @@ public final class Actions {
         if (target.isEmpty()) {
             return;
         }
-        byte[] json = session.caseJson();
+        byte[] json = inCourse() ? org.stasissheet.intake.CaseWriter.write(course.currentCase().orElseThrow())
+                .getBytes(StandardCharsets.UTF_8) : session.caseJson();
         OffsetDateTime now = OffsetDateTime.now(clock);
         Worksheet ws = sheet.get();
         status.set("Writing " + target.get().getFileName() + "…");
@@ -406,7 +408,14 @@ public final class Actions {
 
     /** Puts the handoff note of the complete case on the clipboard (without the patient label). */
     public void copyHandoffNote() {
-        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (inCourse() && course.editingLatest() && course.currentWorksheet().isPresent()) {
+            // the latest assessment of a course: its note with the trend line
+            shell.copyToClipboard(org.stasissheet.report.CourseText.note(course.reportProperty().get().orElseThrow(),
+                    false));
+            status.set("Handoff note with the course's trend copied to the clipboard (no patient label in it)");
+            return;
+        }
+        Optional<Worksheet> sheet = inCourse() ? course.currentWorksheet() : session.completeWorksheetProperty().get();
         if (sheet.isEmpty()) {
             shell.showProblems("No handoff note: the case has problems", List.of(
                     "Fix the entries marked PROBLEM first: a note is only written for a complete case."));

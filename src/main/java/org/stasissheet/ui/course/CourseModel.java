@@ -36,6 +36,7 @@ import org.stasissheet.intake.Labs;
 import org.stasissheet.ui.app.CaseSession;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.FormState;
+import org.stasissheet.worksheet.Worksheet;
 
 /**
  * The view-model of the course of treatment in the form: the course as last complete, which of its assessments the
@@ -72,7 +73,12 @@ public final class CourseModel {
     public CourseModel(CaseSession session) {
         this.session = Objects.requireNonNull(session, "session");
         session.completeCaseProperty().addListener((o, was, now) -> formChanged());
-        session.recomputationsProperty().addListener(o -> formChanged());
+        // a recomputation ends with this tick, after the session showed the case alone: the course's worksheet of
+        // the moment (with the course's tumor-lysis baseline) replaces it
+        session.recomputationsProperty().addListener(o -> {
+            formChanged();
+            showSheet();
+        });
         session.ruleSetProperty().addListener(o -> course.get().ifPresent(this::show));
     }
 
@@ -112,6 +118,31 @@ public final class CourseModel {
 
     public boolean active() {
         return course.get().isPresent();
+    }
+
+    /**
+     * The case of the assessment the form shows as the course assesses it (with the course's tumor-lysis baseline
+     * when the entry has none); empty without a course or while the form has problems.
+     */
+    public Optional<Case> currentCase() {
+        if (course.get().isEmpty() || !formComplete.get() || session.completeCaseProperty().get().isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(course.get().get().caseAt(editing));
+    }
+
+    /** The worksheet of {@link #currentCase()}, from the course report. */
+    public Optional<Worksheet> currentWorksheet() {
+        return currentCase().flatMap(c -> report.get().map(r -> r.worksheets().get(editing)));
+    }
+
+    /** Whether the form shows the course's latest assessment (its handoff note then carries the trend). */
+    public boolean editingLatest() {
+        return course.get().map(c -> editing == c.assessments().size() - 1).orElse(false);
+    }
+
+    private void showSheet() {
+        currentWorksheet().ifPresent(w -> session.sheet().show(w, List.of()));
     }
 
     /** The index, among the assessments in time order, of the one the entry form shows. */
@@ -411,6 +442,7 @@ public final class CourseModel {
 
     private void show(Course c) {
         report.set(Optional.of(CourseAssessor.assess(c, session.ruleSetProperty().get())));
+        showSheet();
     }
 
     private void loadForm(Case c) {
@@ -423,6 +455,7 @@ public final class CourseModel {
             loadingForm = false;
         }
         formComplete.set(true);
+        showSheet();
     }
 
     private boolean mayChange(String what) {

@@ -343,6 +343,36 @@ class CourseFormTest {
     }
 
     @Test
+    @DisplayName("in a course, the worksheet tab, the handoff note and the PDF export take the moment as the course "
+            + "assesses it: the invented AML course's latest potassium counts against the first assessment as "
+            + "baseline (Cairo–Bishop 25 % change), which the entry alone does not carry")
+    void worksheetOfTheMoment() throws Exception {
+        Path file = data.resolve("aml.json");
+        Files.copy(Path.of("samples", "courses", "aml-leukapheresis-hydroxyurea.json"), file);
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        recompute();
+        Course c = ((CourseReader.Accepted) CourseReader.read(Files.readAllBytes(file))).course();
+        CourseReport core = CourseAssessor.assess(c, RULES);
+        var shown = window.session().sheet().content().worksheet().orElseThrow();
+        assertEquals(core.latest(), shown, "the worksheet tab shows the course's latest moment");
+        var alone = window.session().completeWorksheetProperty().get().orElseThrow();
+        assertFalse(alone.tumorLysis().equals(shown.tumorLysis()),
+                "the entry alone, without the course's baseline, would be assessed differently");
+        FormHarness.fx(() -> window.actions().copyHandoffNote());
+        assertEquals(CourseText.note(core, false), shell.clipboard.get(0));
+        assertTrue(shell.clipboard.get(0).contains("Trend: white cell count 236 → 148 → 91"), shell.clipboard.get(0));
+
+        Path pdf = data.resolve("aml-latest.pdf");
+        shell.files.add(pdf);
+        FormHarness.fx(() -> window.actions().exportPdf());
+        FormHarness.settle(window);
+        var back = org.stasissheet.files.WorksheetPdfs.read(Files.readAllBytes(pdf));
+        assertEquals(CaseWriter.write(c.caseAt(2)), new String(back.caseJson(), StandardCharsets.UTF_8),
+                "the PDF embeds the case it shows, baseline included");
+    }
+
+    @Test
     @DisplayName("the course panel shows the standing caution and the course's own")
     void caution(FxRobot robot) throws Exception {
         FormHarness.fx(() -> window.showCourse());
