@@ -178,7 +178,12 @@ public final class CourseModel {
             } finally {
                 loadingForm = false;
             }
-            c = session.completeCaseProperty().get().orElseThrow();
+            Optional<Case> timed = session.completeCaseProperty().get();
+            if (timed.isEmpty() || timed.get().assessedAt().isEmpty()) {
+                return refuse("Not made a course: Assessed at \"" + timeText.trim() + "\" was refused; see the "
+                        + "message beside the field.");
+            }
+            c = timed.get();
         }
         editing = 0;
         savedJson = new byte[0];

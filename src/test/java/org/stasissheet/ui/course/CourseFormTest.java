@@ -373,6 +373,30 @@ class CourseFormTest {
     }
 
     @Test
+    @DisplayName("the invented IgM exchange series: the second exchange's small fall is flagged REVIEW in the table, "
+            + "as the core's review rule marks it; one chart each for serum viscosity and IgM")
+    void reviewFlagShown() throws Exception {
+        Path file = data.resolve("igm.json");
+        Files.copy(Path.of("samples", "courses", "igm-exchange-series.json"), file);
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        CourseReport core = CourseAssessor.assess(
+                ((CourseReader.Accepted) CourseReader.read(Files.readAllBytes(file))).course(), RULES);
+        assertFalse(core.procedures().get(0).needsReview());
+        assertTrue(core.procedures().get(1).needsReview(), "the core marks the second exchange");
+        List<CourseRows.ReviewRow> table = List.copyOf(viewOf(window).table().getItems());
+        assertEquals(CourseRows.rows(core), table);
+        List<CourseRows.ReviewRow> flagged = table.stream().filter(CourseRows.ReviewRow::flagged).toList();
+        assertEquals(2, flagged.size(), table.toString());
+        assertTrue(flagged.stream().allMatch(r -> r.procedure().startsWith("#4 plasma exchange")), flagged.toString());
+        assertTrue(flagged.get(0).review().contains("check the volume processed"), flagged.get(0).review());
+        List<LineChart<Number, Number>> charts = viewOf(window).charts();
+        assertEquals(List.of("serum viscosity (cP)", "IgM (g/L)"), charts.stream().map(LineChart::getTitle).toList());
+        assertEquals(List.of(3, 2, 2, 3), charts.get(0).getData().stream().map(s -> s.getData().size()).toList(),
+                "3 measured, 2 projections of each kind, 3 procedures (two exchanges and rituximab)");
+    }
+
+    @Test
     @DisplayName("the course panel shows the standing caution and the course's own")
     void caution(FxRobot robot) throws Exception {
         FormHarness.fx(() -> window.showCourse());
