@@ -397,6 +397,28 @@ class CourseFormTest {
     }
 
     @Test
+    @DisplayName("closing or replacing with unsaved course changes asks about the course; Cancel keeps it, Discard "
+            + "leaves it for a new case")
+    void unsavedCourseIsAskedAbout() throws Exception {
+        openGertzCourseFile();
+        FormHarness.fx(() -> course().addProcedure(new ProcedureFields(ProcedureFields.Kind.LEUKAPHERESIS,
+                "2026-06-13T10:00:00+02:00", "", "", "mL", "", "2")));
+        assertEquals(3, course().courseProperty().get().orElseThrow().procedures().size(),
+                course().messageProperty().get());
+        shell.unsavedAnswers.push(org.stasissheet.ui.app.Shell.UnsavedChoice.CANCEL);
+        FormHarness.fx(() -> window.stage().fireEvent(new javafx.stage.WindowEvent(window.stage(),
+                javafx.stage.WindowEvent.WINDOW_CLOSE_REQUEST)));
+        assertTrue(shell.asked.contains("unsaved: gertz-course.json"), shell.asked.toString());
+        assertTrue(window.stage().isShowing());
+        assertTrue(course().active());
+
+        shell.unsavedAnswers.push(org.stasissheet.ui.app.Shell.UnsavedChoice.DISCARD);
+        FormHarness.fx(() -> window.actions().newCase());
+        assertFalse(course().active());
+        assertEquals("", window.session().entry().field("patient.label").textProperty().get());
+    }
+
+    @Test
     @DisplayName("the course panel shows the standing caution and the course's own")
     void caution(FxRobot robot) throws Exception {
         FormHarness.fx(() -> window.showCourse());
