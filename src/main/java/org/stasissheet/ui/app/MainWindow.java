@@ -7,7 +7,9 @@ import java.time.temporal.ChronoUnit;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
+import javafx.beans.property.IntegerProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleIntegerProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.geometry.Orientation;
 import javafx.scene.Scene;
@@ -19,6 +21,8 @@ import javafx.scene.control.MenuItem;
 import javafx.scene.control.RadioMenuItem;
 import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
@@ -42,8 +46,8 @@ import org.stasissheet.worksheet.Cautions;
 
 /**
  * The form's window: menu bar, the standing caution (always visible, outside the scrolling areas), entry side
- * and worksheet side, and a status bar. It wires views, view-models and {@link Actions} together and computes
- * nothing itself.
+ * and, in tabs, the worksheet and the course of treatment, and a status bar. It wires views, view-models and
+ * {@link Actions} together and computes nothing itself.
  */
 public final class MainWindow {
     /** Class-path style sheets (JavaFX resolves a scheme-less name through the class loader). */
@@ -63,7 +67,7 @@ public final class MainWindow {
     private final LabLanding labLanding;
     private final CourseModel course;
     private final CourseView courseView;
-    private final javafx.scene.control.TabPane sideTabs = new javafx.scene.control.TabPane();
+    private final TabPane sideTabs = new TabPane();
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -79,10 +83,10 @@ public final class MainWindow {
         RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
         course = new CourseModel(session);
-        // a course's draft holds the whole course besides the form, so a crash loses neither
-        // the pause restarts on a typed edit and on a change of the course (a procedure added); a property, not a
-        // lazy binding, so every change is heard
-        javafx.beans.property.IntegerProperty draftChanges = new javafx.beans.property.SimpleIntegerProperty();
+        // a course's draft holds the whole course besides the form, so a crash loses neither; the pause restarts on
+        // a typed edit and on a change of the course (a procedure added): a property, not a lazy binding, so every
+        // change is heard
+        IntegerProperty draftChanges = new SimpleIntegerProperty();
         entry.editsProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
         course.changesProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
         autosaver = new Autosaver(drafts, background, draftChanges,
@@ -98,12 +102,12 @@ public final class MainWindow {
                 .truncatedTo(ChronoUnit.MINUTES).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME));
         SheetView sheetView = new SheetView(session.sheet());
         courseView = new CourseView(course);
-        javafx.scene.control.Tab sheetTab = new javafx.scene.control.Tab("Worksheet", sheetView.node());
-        javafx.scene.control.Tab courseTab = new javafx.scene.control.Tab("Course of treatment",
+        Tab sheetTab = new Tab("Worksheet", sheetView.node());
+        Tab courseTab = new Tab("Course of treatment",
                 courseView.node());
         courseTab.setId("tab-course");
         sideTabs.getTabs().addAll(sheetTab, courseTab);
-        sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("side-tabs");
         sideTabs.setAccessibleText("Worksheet or course of treatment");
         SplitPane sides = new SplitPane(entryView.node(), sideTabs);
