@@ -246,8 +246,8 @@ public final class CourseModel {
             String prefix = "entries[" + position + "].procedure";
             for (CaseReader.Problem p : rejected.problems()) {
                 lines.add(p.path().startsWith(prefix)
-                        ? ProcedureFields.label(p.path().substring(prefix.length())) + ": " + p.message()
-                        : p.toString());
+                        ? ProcedureFields.label(p.path().substring(prefix.length())) + ": "
+                        + ProcedureFields.inFieldWords(p.message()) : p.toString());
             }
             return refuse("Procedure not added. " + String.join(" ", lines));
         }

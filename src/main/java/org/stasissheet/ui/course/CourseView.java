@@ -147,8 +147,8 @@ public final class CourseView {
         kind.setAccessibleText("Kind of procedure");
         TextField at = field("course-procedure-time", "Time of the procedure", "e.g. 2026-06-11T10:00+02:00");
         TextField volumes = field("course-procedure-plasma-volumes", "Plasma volumes exchanged, 0.5 to 2.0",
-                "plasma volumes");
-        TextField volume = field("course-procedure-volume", "Volume of plasma removed", "or volume removed");
+                "0.5–2.0");
+        TextField volume = field("course-procedure-volume", "Volume of plasma removed", "e.g. 3500");
         ComboBox<String> unit = new ComboBox<>(FXCollections.observableArrayList("L", "mL"));
         unit.setValue("mL");
         unit.setId("course-procedure-volume-unit");
@@ -159,8 +159,7 @@ public final class CourseView {
         fluid.setValue(Procedure.Replacement.ALBUMIN.code());
         fluid.setId("course-procedure-replacement");
         fluid.setAccessibleText("Replacement fluid");
-        TextField blood = field("course-procedure-blood-volumes", "Blood volumes processed, 1 to 4",
-                "blood volumes processed");
+        TextField blood = field("course-procedure-blood-volumes", "Blood volumes processed, 1 to 4", "1–4");
         Button add = button("course-add-procedure", "Add the procedure", () -> {
             if (model.addProcedure(new ProcedureFields(kind.getValue(), at.getText(), volumes.getText(),
                     volume.getText(), unit.getValue(), fluid.getValue(), blood.getText()))) {
@@ -174,14 +173,21 @@ public final class CourseView {
                 model.courseProperty()));
         var exchange = Bindings.createBooleanBinding(() -> kind.getValue() == ProcedureFields.Kind.PLASMA_EXCHANGE,
                 kind.valueProperty());
-        for (Control c : List.of(volumes, volume, unit, fluid)) {
+        Label atLabel = labelFor("Time of the procedure", at);
+        Label volumesLabel = labelFor("Plasma volumes", volumes);
+        Label volumeLabel = labelFor("or Volume removed", volume);
+        Label fluidLabel = labelFor("Replacement fluid", fluid);
+        Label bloodLabel = labelFor("Blood volumes processed", blood);
+        for (Node c : List.of(volumesLabel, volumes, volumeLabel, volume, unit, fluidLabel, fluid)) {
             c.visibleProperty().bind(exchange);
             c.managedProperty().bind(exchange);
         }
-        blood.visibleProperty().bind(exchange.not());
-        blood.managedProperty().bind(exchange.not());
-        FlowPane pane = new FlowPane(6, 4, new Label("New procedure:"), kind, at, volumes, volume, unit, fluid,
-                blood, add);
+        for (Node c : List.of(bloodLabel, blood)) {
+            c.visibleProperty().bind(exchange.not());
+            c.managedProperty().bind(exchange.not());
+        }
+        FlowPane pane = new FlowPane(6, 4, new Label("New procedure:"), kind, atLabel, at, volumesLabel, volumes,
+                volumeLabel, volume, unit, fluidLabel, fluid, bloodLabel, blood, add);
         pane.setId("course-procedure");
         return pane;
     }
@@ -306,6 +312,12 @@ public final class CourseView {
             }
         });
         table.getColumns().add(c);
+    }
+
+    private static Label labelFor(String text, Control field) {
+        Label l = new Label(text);
+        l.setLabelFor(field);
+        return l;
     }
 
     private static Label heading(String text) {

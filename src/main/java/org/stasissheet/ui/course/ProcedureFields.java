@@ -66,6 +66,12 @@ public record ProcedureFields(Kind kind, String at, String plasmaVolumes, String
         return LABELS.getOrDefault(pathBelowProcedure, "New procedure " + pathBelowProcedure);
     }
 
+    /** The reader's message with the file's keys named as the panel labels its fields. */
+    static String inFieldWords(String message) {
+        return message.replace("plasmaVolumes", "Plasma volumes").replace("bloodVolumesProcessed",
+                "Blood volumes processed").replace("or volume (", "or Volume removed (");
+    }
+
     /** The procedure entry of a course file, with only what was typed for this kind. */
     ObjectNode toJson() {
         ObjectNode p = JsonNodeFactory.instance.objectNode();

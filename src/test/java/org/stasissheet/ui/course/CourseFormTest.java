@@ -200,8 +200,9 @@ class CourseFormTest {
         robot.clickOn(add);
         WaitForAsyncUtils.waitForFxEvents();
         String message = ((Label) robot.lookup("#course-message").query()).getText();
-        assertTrue(message.contains("New procedure: a plasma exchange needs plasmaVolumes (0.5–2.0) or volume"),
-                message);
+        // the course reader's message, its keys named as the panel labels the fields
+        assertTrue(message.contains("New procedure: a plasma exchange needs Plasma volumes (0.5–2.0) or Volume "
+                + "removed (in L or mL); neither is given"), message);
         assertTrue(message.contains("neither is given"), message);
         assertEquals(0, course().courseProperty().get().orElseThrow().procedures().size());
         assertEquals("2026-06-11T10:00:00+02:00", time.getText(), "what was typed stays");
