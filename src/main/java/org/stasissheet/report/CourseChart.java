@@ -102,7 +102,8 @@ final class CourseChart {
             t.lineTo(LEFT + plotW, yy);
             t.stroke();
         }
-        // procedures: dashed lines, numbered as in the table of entries
+        // procedures: dashed lines, numbered as in the table of entries; labels stay inside the plot
+        LabelRows rows = new LabelRows(LEFT, LEFT + plotW);
         int n = 0;
         for (CourseEntry e : report.course().entries()) {
             n++;
@@ -117,7 +118,9 @@ final class CourseChart {
             t.lineTo(xx, BOTTOM + plotH);
             t.stroke();
             t.setLineDash(0);
-            text(t, "#" + n + " " + shortKind(p), xx + 1.5f, BOTTOM + plotH - 7, Element.ALIGN_LEFT, 6, false);
+            String label = "#" + n + " " + shortKind(p);
+            float[] at = rows.place(xx, PdfFonts.regular().getWidthPoint(PdfFonts.printable(label), 6));
+            text(t, label, at[0], BOTTOM + plotH - 7 - 7 * at[1], Element.ALIGN_LEFT, 6, false);
         }
         // time labels at the first and last entry
         text(t, ReportTime.FORMAT.format(report.course().entries().get(0).at()), LEFT, BOTTOM - 10,
@@ -166,6 +169,39 @@ final class CourseChart {
         text(t, "● measured   □ projected right after (leukapheresis: largest usual fall)   ○ projected after "
                 + "redistribution (leukapheresis: smallest usual fall)   dashed line: procedure", LEFT, 4, Element.ALIGN_LEFT,
                 6, false);
+    }
+
+    /**
+     * Places the procedure labels of one chart: right of their line, or left of it where the text would pass the
+     * plot's right edge (a procedure near the last entry), never left of the plot; a label that would overlap the
+     * one before it goes one row lower (three rows, then it overlaps rather than leaving the chart).
+     */
+    static final class LabelRows {
+        static final int ROWS = 3;
+        private final float left;
+        private final float right;
+        private final float[] ends = new float[ROWS];
+
+        LabelRows(float left, float right) {
+            this.left = left;
+            this.right = right;
+            java.util.Arrays.fill(ends, -Float.MAX_VALUE);
+        }
+
+        /** The label's left x and its row (0 = top) for a line at {@code x} and a text {@code width} wide. */
+        float[] place(float x, float width) {
+            float at = x + 1.5f;
+            if (at + width > right) {
+                at = x - 1.5f - width;
+            }
+            at = Math.max(left + 1, Math.min(at, right - width));
+            int row = 0;
+            while (row < ROWS - 1 && at < ends[row] + 2) {
+                row++;
+            }
+            ends[row] = Math.max(ends[row], at + width);
+            return new float[] {at, row};
+        }
     }
 
     static String shortKind(Procedure p) {

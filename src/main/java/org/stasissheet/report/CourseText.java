@@ -156,7 +156,8 @@ public final class CourseText {
         if (p instanceof Procedure.PlasmaExchange x) {
             String amount = x.plasmaVolumes().map(v -> Numbers.plain(v) + (v == 1 ? " plasma volume" : " plasma volumes"))
                     .orElseGet(() -> x.volume().orElseThrow() + " removed" + r.plasmaVolumes()
-                            .map(v -> " (about " + Numbers.rounded(v, 2) + " plasma volumes)").orElse(""));
+                            .map(v -> " (about " + Numbers.rounded(v, 2)
+                            + (Numbers.rounded(v, 2).equals("1") ? " plasma volume)" : " plasma volumes)")).orElse(""));
             return "plasma exchange, " + amount + ", replaced with " + x.replacement().words();
         }
         if (p instanceof Procedure.Leukapheresis l) {
@@ -171,17 +172,20 @@ public final class CourseText {
         return "rituximab started";
     }
 
-    static String[] names(Projected p) {
+    /** The names of a projection's two values ("right after", "after redistribution", or the usual falls). */
+    public static String[] names(Projected p) {
         return p.kind() == Projected.Kind.EXCHANGE
                 ? new String[] {ExchangeProjection.IMMEDIATE_SHORT, ExchangeProjection.AFTER_REDISTRIBUTION_SHORT}
                 : new String[] {"at the largest usual fall", "at the smallest usual fall"};
     }
 
-    static String amount(double value, Analyte a) {
+    /** A value of a followed analyte with its unit symbol, for the reader. */
+    public static String amount(double value, Analyte a) {
         return UnitSymbols.format(Numbers.rounded(value, 3), a.canonicalUnit());
     }
 
-    private static String percent(double d) {
+    /** A signed difference in per cent. */
+    public static String percent(double d) {
         return (d > 0 ? "+" : "") + Numbers.rounded(d, 2) + " %";
     }
 

@@ -15,6 +15,13 @@ import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.stasissheet.course.Course;
+import org.stasissheet.course.CourseAssessor;
+import org.stasissheet.course.CourseEntry;
+import org.stasissheet.course.CourseReader;
+import org.stasissheet.course.CourseReport;
+import org.stasissheet.course.CourseWriter;
+import org.stasissheet.course.Procedure;
 import org.stasissheet.files.CaseFiles;
 import org.stasissheet.files.RuleSources;
 import org.stasissheet.intake.Case;
@@ -133,6 +140,85 @@ class PlainWordsTest {
                     CaseWriter.write(c).getBytes(StandardCharsets.UTF_8));
             try (PdfProbe probe = new PdfProbe(pdf)) {
                 check("case " + i++ + " pdf", probe.allText(), problems);
+            }
+        }
+        assertEquals(List.of(), problems.stream().distinct().limit(40).toList());
+    }
+
+    /**
+     * The sample courses, the Gertz 2018 course of the tests, and courses made of generated cases (same patient and
+     * condition, a day apart) with a plasma exchange and a leukapheresis between them.
+     */
+    static List<CourseReport> courses() throws IOException {
+        List<Course> courses = new ArrayList<>();
+        List<Path> files = new ArrayList<>();
+        try (Stream<Path> samples = Files.list(Path.of("samples", "courses"))) {
+            samples.filter(p -> p.toString().endsWith(".json")).sorted().forEach(files::add);
+        }
+        files.add(Path.of("src", "test", "resources", "courses", "gertz-2018-iga.json"));
+        for (Path p : files) {
+            CourseReader.Result r = CourseReader.read(Files.readAllBytes(p));
+            assertInstanceOf(CourseReader.Accepted.class, r, p + ": " + r);
+            courses.add(((CourseReader.Accepted) r).course());
+        }
+        Random r = new Random(2015L);
+        OffsetDateTime start = OffsetDateTime.parse("2026-06-11T08:00:00+02:00");
+        for (int i = 0; i < 20; i++) {
+            Case first = SafetyPropertiesTest.randomCase(r);
+            List<CourseEntry> entries = new ArrayList<>();
+            for (int n = 0; n < 3; n++) {
+                Case c = n == 0 ? first : SafetyPropertiesTest.randomCase(r);
+                entries.add(new CourseEntry.Assessment(new Case(first.patient(), first.condition(), c.labs(),
+                        c.baseline(), c.findings(), c.plan(), java.util.Optional.of(start.plusDays(n)), c.assessor(),
+                        c.extraJson())));
+            }
+            entries.add(new Procedure.PlasmaExchange(start.plusHours(2), java.util.Optional.of(1.0),
+                    java.util.Optional.empty(), Procedure.Replacement.ALBUMIN));
+            entries.add(new Procedure.Leukapheresis(start.plusDays(1).plusHours(2), 2));
+            courses.add(new Course(first.patient(), first.condition(), entries, "{}"));
+        }
+        List<CourseReport> reports = new ArrayList<>();
+        courses.forEach(c -> reports.add(CourseAssessor.assess(c, RULES)));
+        return reports;
+    }
+
+    @Test
+    @DisplayName("the course's text report, handoff note with its trend line and the form's course table and chart "
+            + "titles speak plain clinical words")
+    void courseTextAndNote() throws IOException {
+        List<String> problems = new ArrayList<>();
+        int i = 0;
+        for (CourseReport report : courses()) {
+            String name = "course " + i++;
+            check(name + " text", CourseText.render(report), problems);
+            check(name + " note", CourseText.note(report, true), problems);
+            CourseText.trendLine(report).ifPresent(t -> check(name + " trend", t, problems));
+            StringBuilder form = new StringBuilder();
+            org.stasissheet.ui.course.CourseRows.rows(report).forEach(r -> form.append(String.join("\n",
+                    r.procedure(), r.analyte(), r.before(), r.projectedLow(), r.projectedHigh(), r.measuredNext(),
+                    r.difference(), r.review())).append('\n'));
+            org.stasissheet.ui.course.CourseRows.trends(report).forEach(t -> {
+                form.append(t.title()).append('\n');
+                t.procedures().forEach(p -> form.append(p.label()).append('\n'));
+            });
+            check(name + " form", form.toString(), problems);
+        }
+        assertEquals(List.of(), problems.stream().distinct().limit(40).toList());
+    }
+
+    @Test
+    @DisplayName("the course PDF's text speaks plain clinical words (every sample course, the Gertz course, some "
+            + "generated ones)")
+    void coursePdfText() throws IOException {
+        List<String> problems = new ArrayList<>();
+        List<CourseReport> reports = courses();
+        int i = 0;
+        for (CourseReport report : reports.subList(0, 6)) {
+            byte[] pdf = CoursePdf.render(report, PdfOptions.defaults("test"),
+                    OffsetDateTime.parse("2026-06-12T15:00:00+02:00"),
+                    CourseWriter.write(report.course()).getBytes(StandardCharsets.UTF_8));
+            try (PdfProbe probe = new PdfProbe(pdf)) {
+                check("course " + i++ + " pdf", probe.allText(), problems);
             }
         }
         assertEquals(List.of(), problems.stream().distinct().limit(40).toList());

@@ -71,6 +71,16 @@ public final class ScreenshotTour extends Application {
                     step(5, "high-contrast");
                 },
                 () -> {
+                    w.preferences().set(w.preferences().get().withHighContrast(false));
+                    shell.unsavedAnswers.push(org.stasissheet.ui.app.Shell.UnsavedChoice.DISCARD);
+                    w.actions().openFile(Path.of("samples", "courses", "igm-exchange-series.json"));
+                    w.showCourse();
+                },
+                () -> {
+                    scrollTo(stage.getScene().lookup("#course-charts"));
+                    step(6, "course");
+                },
+                () -> {
                     System.out.println("DONE");
                     System.out.flush();
                     w.preferences().set(w.preferences().get().withHighContrast(false));

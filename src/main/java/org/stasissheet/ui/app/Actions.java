@@ -27,6 +27,8 @@ import org.stasissheet.report.HandoffNote;
 import org.stasissheet.report.PdfOptions;
 import org.stasissheet.report.WorksheetPdf;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.course.CourseReader;
+import org.stasissheet.ui.course.CourseModel;
 import org.stasissheet.ui.draft.Autosaver;
 import org.stasissheet.ui.draft.DraftStore;
 import org.stasissheet.ui.draft.RestoreDialog;
@@ -54,6 +56,8 @@ public final class Actions {
             Optional.empty());
     private final Clock clock;
     private final ZoneId zone;
+    /** The course of treatment the form may hold instead of a single case (attached once by the window). */
+    private CourseModel course;
 
     Actions(CaseSession session, Shell shell, Background background, DraftStore drafts, Autosaver autosaver,
             PreferencesStore preferenceStore, ObjectProperty<Preferences> preferences,
@@ -69,6 +73,22 @@ public final class Actions {
         this.clock = Objects.requireNonNull(clock, "clock");
         this.zone = clock.getZone();
         ruleFolder.set(preferences.get().ruleFolder());
+    }
+
+    /** Attaches the course model: from then on Save, open, replace and restore also know about a course. */
+    void attachCourse(CourseModel model) {
+        this.course = Objects.requireNonNull(model, "model");
+    }
+
+    private boolean inCourse() {
+        return course != null && course.active();
+    }
+
+    /** Leaves a course when the form turns to a single case again. */
+    private void endCourse() {
+        if (course != null) {
+            course.end();
+        }
     }
 
     /** What the last command did, in words, for the status bar. */
@@ -93,6 +113,17 @@ public final class Actions {
 
     /** Asks before unsaved changes would be lost; false when the user cancelled (or a save was not made). */
     boolean mayReplace() {
+        if (inCourse()) {
+            // the course holds the form's assessment: it is the document to save, not the case alone
+            if (!course.dirtyProperty().get()) {
+                return true;
+            }
+            return switch (shell.askUnsaved(course.documentName())) {
+                case SAVE -> saveCourseAndWait();
+                case DISCARD -> true;
+                case CANCEL -> false;
+            };
+        }
         if (!session.dirtyProperty().get()) {
             return true;
         }
@@ -107,6 +138,7 @@ public final class Actions {
         if (!mayReplace()) {
             return;
         }
+        endCourse();
         // the time and the author are recorded from the start; both stay editable
         session.load(FormJson.blank(preferences.get().units())
                 .with("assessedAt", AssessedTime.now(clock))
@@ -136,6 +168,7 @@ public final class Actions {
             shell.showProblems("The demo case could not be opened", List.of(name + " is not in this build."));
             return;
         }
+        endCourse();
         session.load(state.get(), Optional.empty());
         markRunning();
         status.set("Demo case " + name + " (invented data; Save asks where to keep it)");
@@ -154,12 +187,21 @@ public final class Actions {
     public void openFile(Path file) {
         status.set("Opening " + file.getFileName() + "…");
         boolean pdfByName = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
-        background.run(() -> CaseOpening.read(file, pdfByName), opened -> {
-            boolean pdf = pdfByName || opened.fromPdf();
+        background.run(() -> CaseOpening.read(file, pdfByName), read -> {
+            boolean pdf = pdfByName || read.fromPdf();
+            Opened opened = read;
+            if (read.problems().isEmpty() && CourseReader.claimsToBeCourse(read.caseJson())) {
+                if (course != null) {
+                    openCourse(file, pdf, read.caseJson());
+                    return;
+                }
+                opened = CaseOpening.latestOfCourse(file, read.caseJson()); // a window without the course view
+            }
             if (opened.problems().isEmpty()) {
                 Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
                 if (state.isPresent()) {
                     // A case read out of a PDF or a course belongs to no case file: Save asks where.
+                    endCourse();
                     session.load(state.get(), pdf || opened.inside().isPresent() ? Optional.empty()
                             : Optional.of(file));
                     remember(file);
@@ -187,6 +229,19 @@ public final class Actions {
         });
     }
 
+    /** Opens a course file (or the course inside a course PDF, which then belongs to no file). */
+    private void openCourse(Path file, boolean pdf, byte[] json) {
+        List<String> problems = course.open(json, pdf ? Optional.empty() : Optional.of(file));
+        if (!problems.isEmpty()) {
+            status.set("Not opened: " + file.getFileName());
+            shell.showProblems(file.getFileName() + " was not opened; the form is unchanged", problems);
+            return;
+        }
+        remember(file);
+        markRunning();
+        status.set("Opened the course " + file.getFileName() + (pdf ? " (the course inside the PDF)" : ""));
+    }
+
     public void openRecent(Path file) {
         if (mayReplace()) {
             openFile(file);
@@ -194,6 +249,10 @@ public final class Actions {
     }
 
     public void save() {
+        if (inCourse()) {
+            saveCourse(false);
+            return;
+        }
         Optional<Path> doc = session.documentProperty().get();
         if (doc.isPresent()) {
             write(doc.get(), () -> { });
@@ -203,6 +262,10 @@ public final class Actions {
     }
 
     public void saveAs() {
+        if (inCourse()) {
+            saveCourse(true);
+            return;
+        }
         chooseTarget().ifPresent(p -> write(p, () -> { }));
     }
 
@@ -221,6 +284,72 @@ public final class Actions {
             shell.showProblems("The case was not saved", List.of(oneLine(e)));
             return false;
         }
+    }
+
+    /**
+     * Saves the course (stasis-course/1, written atomically) on the background thread; refused, with the reason,
+     * while the assessment in the form has problems, so a course is never saved without what the form shows.
+     */
+    public void saveCourse(boolean askWhere) {
+        Optional<byte[]> json = course.fileBytes();
+        if (json.isEmpty()) {
+            status.set("Course NOT saved");
+            shell.showProblems("The course was not saved", List.of(course.messageProperty().get()));
+            return;
+        }
+        Optional<Path> target = askWhere ? Optional.empty() : course.documentProperty().get();
+        target = target.or(this::chooseCourseTarget);
+        if (target.isEmpty()) {
+            return;
+        }
+        Path to = target.get();
+        status.set("Saving " + to.getFileName() + "…");
+        background.run(() -> {
+            Storage.writeDocument(to, json.get());
+            return to;
+        }, saved -> afterCourseSave(saved, json.get()), e -> {
+            status.set("Course NOT saved: " + oneLine(e));
+            shell.showProblems("The course was not saved", List.of(oneLine(e)));
+        });
+    }
+
+    private boolean saveCourseAndWait() {
+        Optional<byte[]> json = course.fileBytes();
+        if (json.isEmpty()) {
+            shell.showProblems("The course was not saved", List.of(course.messageProperty().get()));
+            return false;
+        }
+        Optional<Path> target = course.documentProperty().get().or(this::chooseCourseTarget);
+        if (target.isEmpty()) {
+            return false;
+        }
+        try {
+            Storage.writeDocument(target.get(), json.get()); // the user is waiting for this one write
+            afterCourseSave(target.get(), json.get());
+            return true;
+        } catch (IOException e) {
+            shell.showProblems("The course was not saved", List.of(oneLine(e)));
+            return false;
+        }
+    }
+
+    private Optional<Path> chooseCourseTarget() {
+        String suggested = session.entry().field("patient.label").textProperty().get()
+                .replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "");
+        return shell.chooseCaseTarget((suggested.isEmpty() ? "course" : suggested + "-course") + ".json",
+                course.documentProperty().get()).map(p -> withExtension(p, ".json"));
+    }
+
+    private void afterCourseSave(Path saved, byte[] json) {
+        course.saved(saved, json);
+        remember(saved);
+        markRunning();
+        autosaver.forget();
+        background.run(() -> {
+            drafts.discardDraft(); // the course file holds it now
+            return saved;
+        }, d -> { }, e -> { });
+        status.set("Saved the course " + saved.getFileName());
     }
 
     private Optional<Path> chooseTarget() {
@@ -268,7 +397,8 @@ public final class Actions {
      * Rendering and writing run on the background thread; the form stays usable meanwhile.
      */
     public void exportPdf() {
-        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        // in a course, the moment as the course assesses it (its tumor-lysis baseline), and that case embedded
+        Optional<Worksheet> sheet = inCourse() ? course.currentWorksheet() : session.completeWorksheetProperty().get();
         if (sheet.isEmpty()) {
             shell.showProblems("No PDF: the case has problems", List.of(
                     "Fix the entries marked PROBLEM first: a PDF is only made of a complete case."));
@@ -287,7 +417,8 @@ public final class Actions {
         if (!folder.equals(preferences.get().exportFolder())) {
             updatePreferences(preferences.get().withExportFolder(folder));
         }
-        byte[] json = session.caseJson();
+        byte[] json = inCourse() ? org.stasissheet.intake.CaseWriter.write(course.currentCase().orElseThrow())
+                .getBytes(StandardCharsets.UTF_8) : session.caseJson();
         OffsetDateTime now = OffsetDateTime.now(clock);
         Worksheet ws = sheet.get();
         status.set("Writing " + target.get().getFileName() + "…");
@@ -303,7 +434,14 @@ public final class Actions {
 
     /** Puts the handoff note of the complete case on the clipboard (without the patient label). */
     public void copyHandoffNote() {
-        Optional<Worksheet> sheet = session.completeWorksheetProperty().get();
+        if (inCourse() && course.editingLatest() && course.currentWorksheet().isPresent()) {
+            // the latest assessment of a course: its note with the trend line
+            shell.copyToClipboard(org.stasissheet.report.CourseText.note(course.reportProperty().get().orElseThrow(),
+                    false));
+            status.set("Handoff note with the course's trend copied to the clipboard (no patient label in it)");
+            return;
+        }
+        Optional<Worksheet> sheet = inCourse() ? course.currentWorksheet() : session.completeWorksheetProperty().get();
         if (sheet.isEmpty()) {
             shell.showProblems("No handoff note: the case has problems", List.of(
                     "Fix the entries marked PROBLEM first: a note is only written for a complete case."));
@@ -355,7 +493,7 @@ public final class Actions {
 
     /** Records (in the session marker) which file the form belongs to, so a restored draft knows it. */
     void markRunning() {
-        Optional<Path> doc = session.documentProperty().get();
+        Optional<Path> doc = inCourse() ? course.documentProperty().get() : session.documentProperty().get();
         background.run(() -> {
             drafts.markRunning(doc);
             return doc;
@@ -375,7 +513,10 @@ public final class Actions {
         boolean kept = false;
         for (int i = 0; i < found.size() && !restored && !kept; i++) {
             DraftStore.Draft d = found.get(i);
-            Optional<FormState> state = FormJson.read(d.caseJson(), preferences.get().units());
+            boolean courseDraft = course != null && CourseModel.isCourseDraft(d.caseJson());
+            Optional<FormState> state = courseDraft
+                    ? (course.readable(d.caseJson()) ? Optional.of(FormState.BLANK) : Optional.empty())
+                    : FormJson.read(d.caseJson(), preferences.get().units());
             if (state.isEmpty()) {
                 try {
                     notes.add("A draft could not be read back; it was kept as " + drafts.setAside(d));
@@ -385,10 +526,16 @@ public final class Actions {
                 continue;
             }
             Path file = drafts.fileOf(d);
-            String detail = RestoreDialog.text(d, state.get().get("patient.label"), file, zone, i + 1, found.size());
+            String detail = (courseDraft ? "A course of treatment. " : "")
+                    + RestoreDialog.text(d, courseDraft ? CourseModel.labelOf(d.caseJson()) : state.get().get("patient.label"),
+                            file, zone, i + 1, found.size());
             switch (shell.offerRestore(detail)) {
                 case RESTORE -> {
-                    session.restore(state.get(), d.document());
+                    if (courseDraft) {
+                        course.restore(d.caseJson());
+                    } else {
+                        session.restore(state.get(), d.document());
+                    }
                     restored = true;
                     int left = found.size() - i - 1;
                     notes.add(0, "Draft restored: check it, then save" + (left == 0 ? "" : " (" + left + " more draft"
@@ -500,16 +647,11 @@ public final class Actions {
             if (WorksheetPdfs.looksLikePdf(file, bytes)) {
                 try {
                     WorksheetPdfs.ReadBack back = WorksheetPdfs.read(bytes);
-                    if (org.stasissheet.load.Inputs.isCourse(back.caseJson())) {
-                        return latestOfCourse(file, back.caseJson()); // a course PDF embeds its course
-                    }
+                    // a course PDF embeds its course: returned as it is, for the course view to open
                     return new Opened(back.caseJson(), List.of(), true, back.warnings());
                 } catch (IOException e) {
                     return new Opened(new byte[0], List.of(file.getFileName() + ": " + oneLine(e)));
                 }
-            }
-            if (org.stasissheet.load.Inputs.isCourse(bytes)) {
-                return latestOfCourse(file, bytes);
             }
             return new Opened(bytes, List.of());
         }

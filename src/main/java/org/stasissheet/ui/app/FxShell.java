@@ -50,9 +50,9 @@ public final class FxShell implements Shell {
 
     @Override
     public Optional<Path> chooseCaseToOpen(Optional<Path> near) {
-        FileChooser c = chooser("Open a case or a worksheet PDF", near);
+        FileChooser c = chooser("Open a case, a course or a worksheet PDF", near);
         c.getExtensionFilters().addAll(
-                new FileChooser.ExtensionFilter("Case files and worksheet PDFs", "*.json", "*.pdf"),
+                new FileChooser.ExtensionFilter("Case and course files, worksheet PDFs", "*.json", "*.pdf"),
                 new FileChooser.ExtensionFilter("All files", "*"));
         return Optional.ofNullable(c.showOpenDialog(owner)).map(File::toPath);
     }

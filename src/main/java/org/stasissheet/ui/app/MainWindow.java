@@ -4,7 +4,9 @@ import java.nio.file.Path;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
+import javafx.beans.property.IntegerProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleIntegerProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.geometry.Orientation;
 import javafx.scene.Scene;
@@ -16,6 +18,8 @@ import javafx.scene.control.MenuItem;
 import javafx.scene.control.RadioMenuItem;
 import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
@@ -24,6 +28,8 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.stasissheet.ui.course.CourseModel;
+import org.stasissheet.ui.course.CourseView;
 import org.stasissheet.ui.labs.LabImportWindow;
 import org.stasissheet.ui.labs.LabLanding;
 import org.stasissheet.ui.draft.Autosaver;
@@ -38,8 +44,8 @@ import org.stasissheet.worksheet.Cautions;
 
 /**
  * The form's window: menu bar, the standing caution (always visible, outside the scrolling areas), entry side
- * and worksheet side, and a status bar. It wires views, view-models and {@link Actions} together and computes
- * nothing itself.
+ * and, in tabs, the worksheet and the course of treatment, and a status bar. It wires views, view-models and
+ * {@link Actions} together and computes nothing itself.
  */
 public final class MainWindow {
     /** Class-path style sheets (JavaFX resolves a scheme-less name through the class loader). */
@@ -58,6 +64,9 @@ public final class MainWindow {
     private final Shell shell;
     private final LabLanding labLanding;
     private final PulmonarySuggestionView suggestion;
+    private final CourseModel course;
+    private final CourseView courseView;
+    private final TabPane sideTabs = new TabPane();
 
     private MainWindow(Stage stage, FormSettings settings) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -72,18 +81,36 @@ public final class MainWindow {
         labLanding = new LabLanding(entry);
         RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
-        autosaver = new Autosaver(drafts, background, entry.editsProperty(), session::caseJson,
-                settings.autosaveDelay(), settings.clock());
+        course = new CourseModel(session);
+        // a course's draft holds the whole course besides the form, so a crash loses neither; the pause restarts on
+        // a typed edit and on a change of the course (a procedure added): a property, not a lazy binding, so every
+        // change is heard
+        IntegerProperty draftChanges = new SimpleIntegerProperty();
+        entry.editsProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
+        course.changesProperty().addListener(o -> draftChanges.set(draftChanges.get() + 1));
+        autosaver = new Autosaver(drafts, background, draftChanges,
+                () -> course.active() ? course.draftJson() : session.caseJson(), settings.autosaveDelay(),
+                settings.clock());
         actions = new Actions(session, shell, background, drafts, autosaver, preferenceStore, preferences,
                 settings.rules(), settings.clock());
         actions.ruleFolderProperty().set(first.folder());
+        actions.attachCourse(course);
         entry.unitSystemProperty().bind(Bindings.createObjectBinding(() -> preferences.get().units(), preferences));
 
         EntryView entryView = new EntryView(entry, settings.clock());
         SheetView sheetView = new SheetView(session.sheet());
         suggestion = new PulmonarySuggestionView(session.sheet(), entry.field("findings.pulmonaryGrade"));
         PulmonarySuggestionView.attachUnder(entryView.inputs(), "findings-pulmonaryGrade", suggestion.node());
-        SplitPane sides = new SplitPane(entryView.node(), sheetView.node());
+        courseView = new CourseView(course);
+        Tab sheetTab = new Tab("Worksheet", sheetView.node());
+        Tab courseTab = new Tab("Course of treatment",
+                courseView.node());
+        courseTab.setId("tab-course");
+        sideTabs.getTabs().addAll(sheetTab, courseTab);
+        sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        sideTabs.setId("side-tabs");
+        sideTabs.setAccessibleText("Worksheet or course of treatment");
+        SplitPane sides = new SplitPane(entryView.node(), sideTabs);
         sides.setOrientation(Orientation.HORIZONTAL);
         sides.setDividerPositions(0.42);
 
@@ -103,10 +130,12 @@ public final class MainWindow {
         preferences.addListener((o, was, now) -> applyLook(scene, now));
         applyLook(scene, preferences.get());
         stage.setScene(scene);
-        stage.titleProperty().bind(Bindings.createStringBinding(() -> "Stasis Sheet — "
-                        + session.documentProperty().get().map(p -> p.getFileName().toString()).orElse("case not saved to a file")
-                        + (session.dirtyProperty().get() ? " • unsaved changes" : ""),
-                session.documentProperty(), session.dirtyProperty()));
+        stage.titleProperty().bind(Bindings.createStringBinding(() -> "Stasis Sheet — " + (course.active()
+                        ? "course " + course.documentName() : session.documentProperty().get()
+                        .map(p -> p.getFileName().toString()).orElse("case not saved to a file"))
+                        + (unsaved() ? " • unsaved changes" : ""),
+                session.documentProperty(), session.dirtyProperty(), course.courseProperty(),
+                course.documentProperty(), course.dirtyProperty()));
         stage.setOnCloseRequest(e -> {
             if (!actions.closeRequested()) {
                 e.consume();
@@ -168,6 +197,21 @@ public final class MainWindow {
         return background;
     }
 
+    /** The course of treatment the form may hold. */
+    public CourseModel course() {
+        return course;
+    }
+
+    /** The course panel (charts and table). */
+    public CourseView courseView() {
+        return courseView;
+    }
+
+    /** Brings the course panel to the front. */
+    public void showCourse() {
+        sideTabs.getSelectionModel().select(1);
+    }
+
     public ObjectProperty<Preferences> preferences() {
         return preferences;
     }
@@ -203,7 +247,7 @@ public final class MainWindow {
         Menu file = new Menu("_Case");
         file.setId("menu-case");
         MenuItem newCase = item("_New case", "Shortcut+N", "action-new", actions::newCase);
-        MenuItem open = item("_Open case or worksheet PDF…", "Shortcut+O", "action-open", actions::open);
+        MenuItem open = item("_Open case, course or PDF…", "Shortcut+O", "action-open", actions::open);
         Menu recent = new Menu("Open _recent");
         recent.setId("menu-recent");
         recent.setOnShowing(e -> fillRecent(recent));
@@ -281,7 +325,11 @@ public final class MainWindow {
                 () -> org.stasissheet.ui.register.RegisterLauncher.open(settings, background,
                         actions::report)));
 
-        MenuBar bar = new MenuBar(file, sheet, rules, register, view);
+        Menu courseMenu = new Menu("C_ourse");
+        courseMenu.setId("menu-course");
+        courseMenu.getItems().add(item("Show the _course of treatment", "Shortcut+U", "action-show-course",
+                this::showCourse));
+        MenuBar bar = new MenuBar(file, sheet, courseMenu, rules, register, view);
         bar.setId("menu-bar");
         return bar;
     }
@@ -311,14 +359,19 @@ public final class MainWindow {
         return i;
     }
 
+    /** Whether the document the window holds (the course, or else the case) has unsaved changes. */
+    private boolean unsaved() {
+        return course.active() ? course.dirtyProperty().get() : session.dirtyProperty().get();
+    }
+
     private HBox statusBar() {
         Label saved = new Label();
         saved.setId("autosave-status");
         saved.textProperty().bind(autosaver.statusProperty());
         Label dirty = new Label();
         dirty.setId("dirty-status");
-        dirty.textProperty().bind(Bindings.when(session.dirtyProperty()).then("UNSAVED CHANGES")
-                .otherwise("saved"));
+        dirty.textProperty().bind(Bindings.createStringBinding(() -> unsaved() ? "UNSAVED CHANGES" : "saved",
+                session.dirtyProperty(), course.courseProperty(), course.dirtyProperty()));
         Label message = new Label();
         message.setId("action-status");
         message.textProperty().bind(actions.statusProperty());

@@ -26,10 +26,10 @@ public interface Shell {
     /** The form has changes that are not in a file; asked before they would be replaced or closed. */
     UnsavedChoice askUnsaved(String documentName);
 
-    /** A case file (JSON) or a worksheet PDF to open. */
+    /** A case file, a course file (both JSON) or a worksheet or course PDF to open. */
     Optional<Path> chooseCaseToOpen(Optional<Path> near);
 
-    /** Where to save the case JSON. */
+    /** Where to save the case JSON (or the course JSON while the form holds a course). */
     Optional<Path> chooseCaseTarget(String suggestedName, Optional<Path> near);
 
     /** Where to write the worksheet PDF. */

@@ -83,23 +83,26 @@ class FilesFormTest {
     }
 
     @Test
-    @DisplayName("a course given at start opens its latest assessment, tied to no file so Save never overwrites it")
+    @DisplayName("a course given at start opens as the course, tied to its file, the form showing its latest assessment")
     void courseAtStart() throws Exception {
         Path course = Path.of("samples", "courses", "igm-exchange-series.json").toAbsolutePath();
         ScriptedShell other = new ScriptedShell();
         MainWindow w = openWith(course, other);
+        // it opens as the course, tied to its file (Save writes the course, never a single case over it)
+        assertTrue(w.course().active(), w.actions().statusProperty().get());
+        assertEquals(Optional.of(course), w.course().documentProperty().get());
         assertEquals(Optional.empty(), w.session().documentProperty().get());
         assertEquals("Demo patient E, ward 3", w.session().entry().field("patient.label").textProperty().get());
-        // the sample's third and latest assessment: serum viscosity 3.7 cP at 2026-06-12T14:00+02:00
+        // the form shows the sample's third and latest assessment: serum viscosity 3.7 cP at 2026-06-12T14:00+02:00
         assertEquals("3.7", w.session().entry().field("labs.serumViscosity").textProperty().get());
-        assertTrue(w.actions().statusProperty().get().contains("latest of the course's 3 assessments"),
+        assertTrue(w.actions().statusProperty().get().contains("Opened the course"),
                 w.actions().statusProperty().get());
         FormHarness.fx(() -> w.stage().close());
         w.background().close();
     }
 
     @Test
-    @DisplayName("a course PDF given at start opens the latest assessment of the course it embeds")
+    @DisplayName("a course PDF given at start opens the course it embeds, showing its latest assessment")
     void coursePdfAtStart() throws Exception {
         Path course = Path.of("samples", "courses", "igm-exchange-series.json");
         Path pdf = data.resolve("course.pdf");
@@ -109,6 +112,8 @@ class FilesFormTest {
         ScriptedShell other = new ScriptedShell();
         MainWindow w = openWith(pdf, other);
         assertTrue(other.problemsShown.isEmpty(), other.problemsShown.toString());
+        assertTrue(w.course().active(), w.actions().statusProperty().get());
+        assertEquals(Optional.empty(), w.course().documentProperty().get(), "Save asks where: the PDF stays as it is");
         assertEquals(Optional.empty(), w.session().documentProperty().get());
         assertEquals("3.7", w.session().entry().field("labs.serumViscosity").textProperty().get());
         FormHarness.fx(() -> w.stage().close());
