@@ -526,7 +526,7 @@ public final class Actions {
                 continue;
             }
             Path file = drafts.fileOf(d);
-            String detail = (courseDraft ? "A course of treatment. " : "")
+            String detail = (courseDraft ? "This is a draft of a course of treatment, not of a single case.\n\n" : "")
                     + RestoreDialog.text(d, courseDraft ? CourseModel.labelOf(d.caseJson()) : state.get().get("patient.label"),
                             file, zone, i + 1, found.size());
             switch (shell.offerRestore(detail)) {

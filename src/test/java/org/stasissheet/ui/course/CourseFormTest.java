@@ -226,6 +226,8 @@ class CourseFormTest {
     @DisplayName("a case without a time asks for one before it becomes a course; a later assessment needs a time")
     void timesAreAskedFor() throws Exception {
         FormHarness.fx(() -> window.actions().newCase());
+        // a new case starts with the current time; a case without one (time cleared) must be asked for it
+        FormHarness.fx(() -> window.session().entry().field("assessedAt").textProperty().set(""));
         boolean[] ok = new boolean[3];
         FormHarness.fx(() -> ok[0] = course().start(""));
         assertFalse(ok[0]);
@@ -309,7 +311,7 @@ class CourseFormTest {
         ScriptedShell next = new ScriptedShell();
         next.restore = true;
         MainWindow again = FormHarness.open(FormHarness.settings(data, next));
-        assertTrue(next.asked.stream().anyMatch(q -> q.startsWith("restore: A draft of a course")), next.asked.toString());
+        assertTrue(next.asked.stream().anyMatch(q -> q.startsWith("restore: This is a draft of a course of treatment")), next.asked.toString());
         CourseModel restored = again.course();
         assertTrue(restored.active());
         assertEquals(CourseWriter.write(before), CourseWriter.write(restored.courseProperty().get().orElseThrow()));
