@@ -1,6 +1,7 @@
 #!/bin/sh
 # Builds the installable application: target/dist/stasis-sheet/ (bin/stasis-sheet runs it, no JDK or Maven needed)
-# and, with dpkg-deb and fakeroot present, target/dist/stasis-sheet_VERSION-1_ARCH.deb. Linux only so far.
+# and, with dpkg-deb and fakeroot present (and STASIS_NO_DEB unset), target/dist/stasis-sheet_VERSION-1_ARCH.deb.
+# Linux only so far.
 #
 #   mvn -Pdist package        (calls this script after the jar and target/lib are built, then check-app-image.sh)
 #   sh src/dist/build-app-image.sh VERSION    (by hand, after `mvn -q package -DskipTests`)
@@ -91,7 +92,9 @@ sh "$image/lib/app/make-archive.sh" || echo "build-app-image: the image has no c
 echo "build-app-image: wrote $image ($(du -sh "$image" | cut -f1))"
 
 # The Debian package, only where it can be built; its absence is not an error.
-if command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1; then
+if [ -n "${STASIS_NO_DEB:-}" ]; then
+    echo "build-app-image: no .deb (STASIS_NO_DEB is set); the application image is complete"
+elif command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1; then
     # the archive made here is valid only here: the package's post-install makes its own under /opt
     echo "build-app-image: building the .deb"
     mkdir "$work/held"

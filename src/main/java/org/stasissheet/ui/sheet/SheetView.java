@@ -2,6 +2,7 @@ package org.stasissheet.ui.sheet;
 
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.css.PseudoClass;
 import javafx.scene.Node;
@@ -122,7 +123,8 @@ public final class SheetView {
         if (was == null || was.worksheet().isPresent() != c.worksheet().isPresent()
                 || was.volumes().size() != c.volumes().size() || was.exchanges().size() != c.exchanges().size()
                 || was.leukapheresis().size() != c.leukapheresis().size()
-                || !was.apheresisNotes().equals(c.apheresisNotes())) {
+                || !was.apheresisNotes().equals(c.apheresisNotes())
+                || !missingSentence(was).equals(missingSentence(c))) {
             showApheresis(c);
         } else {
             relabel(volumeGrid, 0, rowTexts(c.volumes()));
@@ -138,6 +140,11 @@ public final class SheetView {
         } else {
             relabel(inputs, 0, rowTexts(c.inputs()));
         }
+    }
+
+    /** The one sentence naming what to enter for the apheresis numbers, when something is missing. */
+    private static Optional<String> missingSentence(SheetContent c) {
+        return c.worksheet().flatMap(w -> w.apheresis().missing().sentence());
     }
 
     /** Sets the texts of a table whose shape did not change, skipping its first {@code skip} cells (headings). */
@@ -261,7 +268,7 @@ public final class SheetView {
         if (c.worksheet().isEmpty()) {
             return;
         }
-        c.worksheet().flatMap(w -> w.apheresis().missing().sentence()).ifPresent(sentence -> {
+        missingSentence(c).ifPresent(sentence -> {
             Label missing = cell(sentence, "apheresis-missing");
             missing.setId("apheresis-missing");
             missing.getStyleClass().addAll("notice", "notice-incomplete");
