@@ -187,27 +187,21 @@ public final class Actions {
     public void openFile(Path file) {
         status.set("Opening " + file.getFileName() + "…");
         boolean pdfByName = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".pdf");
-        background.run(() -> CaseOpening.read(file, pdfByName), read -> {
-            boolean pdf = pdfByName || read.fromPdf();
-            Opened opened = read;
-            if (read.problems().isEmpty() && CourseReader.claimsToBeCourse(read.caseJson())) {
-                if (course != null) {
-                    openCourse(file, pdf, read.caseJson());
-                    return;
-                }
-                opened = CaseOpening.latestOfCourse(file, read.caseJson()); // a window without the course view
+        background.run(() -> CaseOpening.read(file, pdfByName), opened -> {
+            boolean pdf = pdfByName || opened.fromPdf();
+            if (opened.problems().isEmpty() && CourseReader.claimsToBeCourse(opened.caseJson())) {
+                openCourse(file, pdf, opened.caseJson());
+                return;
             }
             if (opened.problems().isEmpty()) {
                 Optional<FormState> state = FormJson.read(opened.caseJson(), preferences.get().units());
                 if (state.isPresent()) {
-                    // A case read out of a PDF or a course belongs to no case file: Save asks where.
+                    // A case read out of a PDF belongs to no case file: Save asks where.
                     endCourse();
-                    session.load(state.get(), pdf || opened.inside().isPresent() ? Optional.empty()
-                            : Optional.of(file));
+                    session.load(state.get(), pdf ? Optional.empty() : Optional.of(file));
                     remember(file);
                     markRunning();
-                    status.set("Opened " + file.getFileName() + opened.inside().map(i -> " (" + i + ")")
-                            .orElse(pdf ? " (the case inside the worksheet PDF)" : "")
+                    status.set("Opened " + file.getFileName() + (pdf ? " (the case inside the worksheet PDF)" : "")
                             + opened.warnings().stream().map(w -> ". Warning: " + w).collect(Collectors.joining()));
                     return;
                 }
@@ -603,17 +597,11 @@ public final class Actions {
      * What opening a file gave: the case as JSON bytes, or why not; {@code warnings} are what the reader should
      * know about a case that was opened (a worksheet PDF without the digest of its case).
      */
-    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings,
-                  Optional<String> inside) {
+    record Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
         Opened {
             Objects.requireNonNull(caseJson, "caseJson");
             problems = List.copyOf(problems);
             warnings = List.copyOf(warnings);
-            Objects.requireNonNull(inside, "inside");
-        }
-
-        Opened(byte[] caseJson, List<String> problems, boolean fromPdf, List<String> warnings) {
-            this(caseJson, problems, fromPdf, warnings, Optional.empty());
         }
 
         Opened(byte[] caseJson, List<String> problems) {
@@ -654,27 +642,6 @@ public final class Actions {
                 }
             }
             return new Opened(bytes, List.of());
-        }
-
-        /**
-         * A course opens as the case of its latest assessment (with the course's tumor-lysis baseline), tied to no
-         * file, so that Save never writes a single case over the course.
-         */
-        static Opened latestOfCourse(Path file, byte[] bytes) {
-            org.stasissheet.course.CourseReader.Result r = org.stasissheet.course.CourseReader.read(bytes);
-            if (r instanceof org.stasissheet.course.CourseReader.Rejected rejected) {
-                List<String> lines = new ArrayList<>();
-                lines.add(file.getFileName() + " is a course that could not be read:");
-                rejected.problems().forEach(p -> lines.add(p.toString()));
-                return new Opened(new byte[0], lines);
-            }
-            org.stasissheet.course.Course course = ((org.stasissheet.course.CourseReader.Accepted) r).course();
-            int last = course.assessments().size() - 1;
-            byte[] json = org.stasissheet.intake.CaseWriter.write(course.caseAt(last))
-                    .getBytes(StandardCharsets.UTF_8);
-            return new Opened(json, List.of(), false, List.of(), Optional.of("the latest of the course's "
-                    + course.assessments().size() + " assessments, at " + course.assessments().get(last).at()
-                    + "; Save writes it as a single case"));
         }
 
         private static boolean startsAsPdf(Path file) throws IOException {
