@@ -28,7 +28,7 @@ public final class StasisCommand implements Runnable {
 
     /** Runs the command line and returns the exit code; never throws. */
     public static int run(String[] args) {
-        return run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true));
+        return run(args, Terminal.console(System.out), Terminal.console(System.err));
     }
 
     public static int run(String[] args, PrintWriter rawOut, PrintWriter rawErr) {

@@ -1,7 +1,11 @@
 package org.stasissheet.cli;
 
+import java.nio.charset.Charset;
+import java.nio.charset.CharsetEncoder;
+import java.text.Normalizer;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
 /**
  * What the command line prints is made safe for a terminal here, in one place: text from a file may hold
@@ -43,6 +47,72 @@ final class Terminal {
                 out.write(text(str.substring(off, off + len)));
             }
         }, true);
+    }
+
+    /**
+     * Standard output or error as a writer in the machine's charset. Where that charset cannot show a character (an
+     * ASCII locale, LANG unset), the character is spelled in ASCII rather than left to the encoder, which prints
+     * "?": "WBC ? 100" would hide whether a limit is above or below.
+     */
+    static java.io.PrintWriter console(java.io.OutputStream stream) {
+        Charset cs = Charset.defaultCharset();
+        java.io.Writer target = new java.io.OutputStreamWriter(stream, cs);
+        CharsetEncoder encoder = cs.newEncoder();
+        if (encoder.canEncode("≥×µ●○→–—…⁹−·°÷≤₂³ö")) {
+            return new java.io.PrintWriter(target, true);
+        }
+        return new java.io.PrintWriter(new java.io.FilterWriter(target) {
+            @Override
+            public void write(int c) throws java.io.IOException {
+                out.write(spelled(String.valueOf((char) c), encoder));
+            }
+
+            @Override
+            public void write(char[] buf, int off, int len) throws java.io.IOException {
+                out.write(spelled(new String(buf, off, len), encoder));
+            }
+
+            @Override
+            public void write(String str, int off, int len) throws java.io.IOException {
+                out.write(spelled(str.substring(off, off + len), encoder));
+            }
+        }, true);
+    }
+
+    /** ASCII spellings of the characters the worksheet, the note and the messages use. */
+    private static final Map<Character, String> SPELLED = Map.ofEntries(
+            Map.entry('●', "*"), Map.entry('○', "."), Map.entry('×', "x"), Map.entry('−', "-"),
+            Map.entry('µ', "u"), Map.entry('→', "->"), Map.entry('–', "-"), Map.entry('—', "--"),
+            Map.entry('÷', "/"), Map.entry('≥', ">="), Map.entry('≤', "<="), Map.entry('·', "-"),
+            Map.entry('°', "deg"), Map.entry('…', "..."), Map.entry('ß', "ss"), Map.entry('≈', "~"),
+            Map.entry('±', "+/-"), Map.entry('‘', "'"), Map.entry('’', "'"), Map.entry('“', "\""),
+            Map.entry('”', "\""), Map.entry('□', "[]"), Map.entry('△', "^"), Map.entry('▲', "^"));
+    private static final String SUPERSCRIPTS = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+    private static final String SUBSCRIPTS = "₀₁₂₃₄₅₆₇₈₉";
+
+    /** The text with every character the encoder cannot show spelled in ASCII ("×10⁹/L" becomes "x10^9/L"). */
+    static String spelled(String s, CharsetEncoder encoder) {
+        StringBuilder sb = new StringBuilder(s.length() + 8);
+        boolean inSuperscript = false;
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            int sup = SUPERSCRIPTS.indexOf(c);
+            if (encoder.canEncode(c)) {
+                sb.append(c);
+            } else if (sup >= 0) {
+                sb.append(inSuperscript ? "" : "^").append(sup);
+            } else if (SUBSCRIPTS.indexOf(c) >= 0) {
+                sb.append(SUBSCRIPTS.indexOf(c));
+            } else if (SPELLED.containsKey(c)) {
+                sb.append(SPELLED.get(c));
+            } else {
+                // a letter with a mark (ö, é): the letter alone; anything else stays the encoder's "?"
+                String base = Normalizer.normalize(String.valueOf(c), Normalizer.Form.NFD).replaceAll("\\p{M}", "");
+                sb.append(base.length() == 1 && base.charAt(0) < 128 ? base : "?");
+            }
+            inSuperscript = sup >= 0 && !encoder.canEncode(c);
+        }
+        return sb.toString();
     }
 
     /** One line of a message: line breaks are escaped too, and the line is cut at {@link #MAX_LINE_CHARS}. */

@@ -26,6 +26,23 @@ class TerminalTest {
     }
 
     @Test
+    @DisplayName("where the locale is ASCII, limits and units are spelled in ASCII, never printed as '?'")
+    void spelledForAnAsciiLocale() {
+        java.nio.charset.CharsetEncoder ascii = java.nio.charset.StandardCharsets.US_ASCII.newEncoder();
+        // a limit's direction and a unit's power of ten must survive: "?" would hide both
+        assertEquals("WBC >= 100 x10^9/L; K+ <= 6.5 mmol/L",
+                Terminal.spelled("WBC ≥ 100 ×10⁹/L; K+ ≤ 6.5 mmol/L", ascii));
+        assertEquals("x10^12/L, 37 degC, 250 umol/L, PaO2 -> SpO2",
+                Terminal.spelled("×10¹²/L, 37 °C, 250 µmol/L, PaO₂ → SpO₂", ascii));
+        assertEquals("*** ACT NOW  **. REVIEW  *.. NOTE", Terminal.spelled("●●● ACT NOW  ●●○ REVIEW  ●○○ NOTE", ascii));
+        assertEquals("Muller-Beissenhirtz, -3 ... 5", Terminal.spelled("Müller-Beißenhirtz, −3 … 5", ascii));
+        assertEquals("?", Terminal.spelled("Ж", ascii), "a letter with no ASCII spelling stays the encoder's mark");
+        java.nio.charset.CharsetEncoder latin1 = java.nio.charset.StandardCharsets.ISO_8859_1.newEncoder();
+        assertEquals(">= 100 ×10^9/L µmol/L", Terminal.spelled("≥ 100 ×10⁹/L µmol/L", latin1),
+                "what the charset can show is kept as it is (× and µ are in Latin-1)");
+    }
+
+    @Test
     @DisplayName("the wrapped writer escapes whatever a command prints through it")
     void writer() {
         StringWriter target = new StringWriter();
