@@ -16,7 +16,6 @@ import org.stasissheet.measure.Numbers;
 /** The flow and apheresis sections of the text worksheet: the same content as the JSON, caveats included. */
 final class EstimatesText {
     private static final String NL = System.lineSeparator();
-    private static final String NOT_ESTIMATED = "not estimated: ";
 
     private EstimatesText() {
     }
@@ -57,7 +56,7 @@ final class EstimatesText {
         List<FlowPoint> inVitro = known.value();
         List<FlowPoint> inVivo = f.inVivo().known().orElse(List.of());
         List<FlowPoint> leuko = f.leukocrit().known().map(Leukocrit::byDiameter).orElse(List.of());
-        sb.append("  ").append(pad("diameter um", 13)).append(pad("in vitro", 11)).append(pad("in vivo", 11))
+        sb.append("  ").append(pad("diameter µm", 13)).append(pad("in vitro", 11)).append(pad("in vivo", 11))
                 .append(leuko.isEmpty() ? "" : "with leukocrit").append(NL);
         for (int i = 0; i < inVitro.size(); i++) {
             sb.append("  ").append(pad(Numbers.plain(inVitro.get(i).diameterUm()), 13))
@@ -93,11 +92,11 @@ final class EstimatesText {
                 if (parts.length() > 0) {
                     parts.append(", ");
                 }
-                parts.append(Numbers.plain(p.diameterUm())).append(" um ").append(flowNumber(p));
+                parts.append(Numbers.plain(p.diameterUm())).append(" µm ").append(flowNumber(p));
             }
             sb.append(parts);
         } else {
-            sb.append(NOT_ESTIMATED).append(e.whyUnknown().orElseThrow());
+            sb.append(VerdictWords.notEstimated(e.whyUnknown().orElseThrow()));
         }
         sb.append(NL);
     }
@@ -111,7 +110,7 @@ final class EstimatesText {
         return e.known().map(p -> ExchangeProjection.IMMEDIATE_LABEL + ": " + Numbers.rounded(p.immediate(), 3) + unit
                         + "; " + ExchangeProjection.AFTER_REDISTRIBUTION_LABEL + ": "
                         + Numbers.rounded(p.afterRedistribution(), 3) + unit)
-                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
+                .orElseGet(() -> VerdictWords.notEstimated(e.whyUnknown().orElseThrow()));
     }
 
     private static String litres(Estimate<Double> e) {
@@ -120,18 +119,14 @@ final class EstimatesText {
 
     private static String value(Estimate<Double> e, String unit) {
         return e.known().map(v -> Numbers.rounded(v, 3) + unit)
-                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
+                .orElseGet(() -> VerdictWords.notEstimated(e.whyUnknown().orElseThrow()));
     }
 
     private static String range(Estimate<ValueRange> e, String unit) {
         return e.known().map(r -> Numbers.rounded(r.low(), 3) + "–" + Numbers.rounded(r.high(), 3) + unit)
-                .orElseGet(() -> notEstimated(e.whyUnknown().orElseThrow()));
+                .orElseGet(() -> VerdictWords.notEstimated(e.whyUnknown().orElseThrow()));
     }
 
-    /** The reason once: one that already says "not estimated" is not prefixed again. */
-    private static String notEstimated(String why) {
-        return why.contains("not estimated") ? why : NOT_ESTIMATED + why;
-    }
 
     private static void line(StringBuilder sb, String label, String text) {
         sb.append("  ").append(pad(label + ":", 34)).append(text).append(NL);

@@ -84,6 +84,11 @@ public final class VerdictWords {
         return lines;
     }
 
+    /** An estimate's reason, said once: one that already says "not estimated" is not prefixed again. */
+    public static String notEstimated(String why) {
+        return why.contains("not estimated") ? why : "not estimated: " + why;
+    }
+
     public static String upperFirst(String s) {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }

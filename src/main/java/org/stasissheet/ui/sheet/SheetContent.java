@@ -268,8 +268,7 @@ public record SheetContent(Optional<Worksheet> worksheet, List<String> leftOut, 
         if (missing.covers(e)) {
             return SEE_ABOVE;
         }
-        String why = e.whyUnknown().orElseThrow();
-        return why.contains("not estimated") ? why : "not estimated: " + why;
+        return VerdictWords.notEstimated(e.whyUnknown().orElseThrow());
     }
 
 
