@@ -42,6 +42,13 @@ public final class ShutdownGuard {
     private final AtomicReference<FormState> latest = new AtomicReference<>();
     /** The form's text when it last had no unsaved changes; empty while it has some. */
     private final AtomicReference<Optional<FormState>> clean = new AtomicReference<>(Optional.empty());
+    /**
+     * While the form holds a course: the course draft as the autosave would write it (the course, which assessment
+     * the form shows and the form as typed), recorded after each change; a case draft would replace it and lose
+     * the course. Empty without a course.
+     */
+    private final AtomicReference<Optional<byte[]>> courseDraft = new AtomicReference<>(Optional.empty());
+    private final AtomicBoolean courseUnsaved = new AtomicBoolean();
 
     /** Call on the JavaFX thread: it starts recording the form's text. */
     ShutdownGuard(MainWindow window, Duration wait) {
@@ -52,8 +59,20 @@ public final class ShutdownGuard {
         latest.set(entry.snapshot());
         markClean(entry);
         // an edit only moves "latest": the unsaved-changes flag follows a moment later, so it is not trusted here
-        entry.editsProperty().addListener(o -> latest.set(entry.snapshot()));
+        entry.editsProperty().addListener(o -> {
+            latest.set(entry.snapshot());
+            recordCourse();
+        });
         window.session().dirtyProperty().addListener(o -> markClean(entry));
+        window.course().changesProperty().addListener(o -> recordCourse());
+        window.course().dirtyProperty().addListener(o -> recordCourse());
+        recordCourse();
+    }
+
+    private void recordCourse() {
+        boolean active = window.course().active();
+        courseDraft.set(active ? Optional.of(window.course().draftJson()) : Optional.empty());
+        courseUnsaved.set(active && window.course().dirtyProperty().get());
     }
 
     private void markClean(EntryViewModel entry) {
@@ -138,10 +157,12 @@ public final class ShutdownGuard {
             window.background().close();
             window.background().drain(wait.toMillis(), TimeUnit.MILLISECONDS);
             FormState form = latest.get();
-            if (clean.get().map(form::equals).orElse(false)) {
+            boolean formClean = clean.get().map(form::equals).orElse(false);
+            Optional<byte[]> course = courseDraft.get();
+            if (formClean && !courseUnsaved.get()) {
                 window.drafts().endCleanly();
             } else {
-                window.drafts().saveDraft(FormJson.write(form));
+                window.drafts().saveDraft(course.orElseGet(() -> FormJson.write(form)));
             }
             return true;
         } catch (IOException | RuntimeException e) {

@@ -81,6 +81,24 @@ class ShutdownTest {
     }
 
     @Test
+    @DisplayName("shutdown while the form holds a course: the draft is the course with the last edit, not one case")
+    void courseDraftKeptAtShutdown() throws Exception {
+        Path file = Files.copy(Path.of("samples", "courses", "igm-exchange-series.json"), data.resolve("course.json"));
+        FormHarness.fx(() -> window.actions().openFile(file));
+        FormHarness.settle(window);
+        assertTrue(window.course().active());
+        ShutdownGuard guard = WaitForAsyncUtils.asyncFx(() -> new ShutdownGuard(window, Duration.ofSeconds(5)))
+                .get(20, TimeUnit.SECONDS);
+        FormHarness.fx(() -> window.session().entry().field("patient.label").textProperty().set("Invented bed 9"));
+        assertTrue(guard.saveDraft());
+        byte[] draft = Files.readAllBytes(window.drafts().draftFile());
+        assertTrue(org.stasissheet.ui.course.CourseModel.isCourseDraft(draft), new String(draft, StandardCharsets.UTF_8));
+        assertTrue(new String(draft, StandardCharsets.UTF_8).contains("Invented bed 9"), "the last edit is in it");
+        // the sample's three assessments and its procedures are all there
+        assertTrue(window.course().readable(draft));
+    }
+
+    @Test
     @DisplayName("shutdown with nothing unsaved ends the session cleanly: no draft is offered next time")
     void cleanWhenNothingUnsaved() throws Exception {
         FormHarness.fx(() -> window.actions().openFile(Path.of("samples", "iga-borderline.json")));
