@@ -65,7 +65,11 @@ public final class CourseReader {
 
     /** Whether these bytes claim to be a course (by their {@code format}), so callers can tell a course from a case. */
     public static boolean claimsToBeCourse(byte[] bytes) {
-        CaseReader.Parsed parsed = CaseReader.parse(bytes);
+        return claimsToBeCourse(CaseReader.parse(bytes));
+    }
+
+    /** As {@link #claimsToBeCourse(byte[])}, on a file already read once (a cold run reads it once, not twice). */
+    public static boolean claimsToBeCourse(CaseReader.Parsed parsed) {
         return parsed.tree().map(t -> Course.FORMAT.equals(t.path("format").asText(""))).orElse(false);
     }
 

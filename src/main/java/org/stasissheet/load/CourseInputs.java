@@ -5,6 +5,7 @@ import java.time.OffsetDateTime;
 import java.util.Optional;
 import org.stasissheet.course.Course;
 import org.stasissheet.intake.Case;
+import org.stasissheet.intake.CaseReader;
 
 /** Picks one moment of a course for the commands that take a case ({@code assess --at}). */
 public final class CourseInputs {
@@ -17,12 +18,13 @@ public final class CourseInputs {
      */
     public static Case caseOf(Path file, Optional<OffsetDateTime> at, java.io.PrintWriter err) {
         byte[] json = Inputs.caseBytes(file, err);
-        if (!Inputs.isCourse(json)) {
+        CaseReader.Parsed parsed = CaseReader.parse(json);
+        if (!Inputs.isCourse(parsed)) {
             if (at.isPresent()) {
                 throw new InvalidInputException("--at " + at.get() + ": " + file + " is a single case, not a course; "
                         + "leave out --at");
             }
-            return Inputs.parseCase(file, json);
+            return Inputs.parseCase(file, parsed);
         }
         Course course = Inputs.parseCourse(file, json);
         int last = course.assessments().size() - 1;

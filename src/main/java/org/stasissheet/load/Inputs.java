@@ -111,7 +111,16 @@ public final class Inputs {
 
     /** The case in these bytes, or every problem with its path in the file. */
     public static Case parseCase(Path file, byte[] json) {
-        CaseReader.Result result = CaseReader.read(json);
+        return caseOrProblems(file, CaseReader.read(json));
+    }
+
+    /** As {@link #parseCase(Path, byte[])}, on bytes already parsed as JSON: the same case or the same problems. */
+    public static Case parseCase(Path file, CaseReader.Parsed parsed) {
+        return caseOrProblems(file, parsed.tree().map(CaseReader::read)
+                .orElseGet(() -> new CaseReader.Rejected(parsed.problems())));
+    }
+
+    private static Case caseOrProblems(Path file, CaseReader.Result result) {
         if (result instanceof CaseReader.Accepted accepted) {
             return accepted.c();
         }
@@ -124,6 +133,11 @@ public final class Inputs {
     /** Whether these case-or-course bytes are a course ({@code "format": "stasis-course/1"}). */
     public static boolean isCourse(byte[] json) {
         return CourseReader.claimsToBeCourse(json);
+    }
+
+    /** As {@link #isCourse(byte[])}, on bytes already parsed as JSON. */
+    public static boolean isCourse(CaseReader.Parsed parsed) {
+        return CourseReader.claimsToBeCourse(parsed);
     }
 
     /** The course in these bytes (a course file's, or the one embedded in a course PDF), or every problem. */

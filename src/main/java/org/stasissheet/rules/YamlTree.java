@@ -1,5 +1,6 @@
 package org.stasissheet.rules;
 
+import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -68,7 +69,10 @@ final class YamlTree {
     /** Most keys, values and lists in one file; the shipped files have a few hundred each. */
     static final int MAX_NODES = 50_000;
 
-    private static final YAMLFactory FACTORY = new YAMLFactory();
+    /** Built on first use only: a run that reads the shipped set from its JSON form never starts the YAML parser. */
+    private static final class Yaml {
+        static final YAMLFactory FACTORY = new YAMLFactory();
+    }
 
     /** Parses one document; an empty file gives an empty mapping at 1:1. */
     static Node parse(byte[] bytes) throws Malformed {
@@ -78,7 +82,7 @@ final class YamlTree {
                     + " bytes (1 MiB)", new Where(1, 1));
         }
         requireUtf8(bytes);
-        try (JsonParser p = FACTORY.createParser(bytes)) {
+        try (JsonParser p = Yaml.FACTORY.createParser(bytes)) {
             JsonToken t = p.nextToken();
             if (t == null) {
                 return new Mapping(Map.of(), Map.of(), new Where(1, 1));
@@ -98,6 +102,38 @@ final class YamlTree {
         } catch (IOException e) {
             throw new Malformed("cannot read YAML: " + firstLine(e.getMessage()), new Where(1, 1));
         }
+    }
+
+    /**
+     * Writes a tree as plain JSON: mappings as objects in file order, lists as arrays, every value as a string of its
+     * text (null stays null). {@link #readJson} gives back the same tree except the places, which point into the JSON.
+     * The shipped set travels in this form (see {@link RuleSetLoader#compact}) because reading JSON starts far faster
+     * than reading YAML.
+     */
+    static void writeJson(Node node, JsonGenerator g) throws IOException {
+        if (node instanceof Mapping m) {
+            g.writeStartObject();
+            for (Map.Entry<String, Node> e : m.entries().entrySet()) {
+                g.writeFieldName(e.getKey());
+                writeJson(e.getValue(), g);
+            }
+            g.writeEndObject();
+        } else if (node instanceof Sequence s) {
+            g.writeStartArray();
+            for (Node item : s.items()) {
+                writeJson(item, g);
+            }
+            g.writeEndArray();
+        } else if (((Scalar) node).isNull()) {
+            g.writeNull();
+        } else {
+            g.writeString(((Scalar) node).text());
+        }
+    }
+
+    /** Reads one tree written by {@link #writeJson}, starting at its first token, with the same limits as YAML. */
+    static Node readJson(JsonParser p) throws IOException, Malformed {
+        return read(p, p.currentToken(), 1, new int[1]);
     }
 
     /** Refuses bytes that are not UTF-8, naming the first bad byte and where it is. */
