@@ -3,10 +3,10 @@ package org.stasissheet.cli;
 import org.stasissheet.load.Inputs;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.OffsetDateTime;
 import java.util.concurrent.Callable;
 import org.stasissheet.course.CourseAssessor;
 import org.stasissheet.course.CourseReport;
+import org.stasissheet.load.WallClock;
 import org.stasissheet.report.CourseJson;
 import org.stasissheet.report.CoursePdf;
 import org.stasissheet.report.CourseText;
@@ -50,7 +50,7 @@ final class CourseCommand implements Callable<Integer> {
                 Inputs.ruleSet(rules.dir()));
         PrintWriter out = spec.commandLine().getOut();
         if (output != null) {
-            OutputFiles.write(output, CoursePdf.render(report, layout.options(), OffsetDateTime.now(),
+            OutputFiles.write(output, CoursePdf.render(report, layout.options(), WallClock.now(),
                     courseJson));
             out.println("wrote " + output);
         } else {

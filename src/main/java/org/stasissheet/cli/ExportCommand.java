@@ -9,6 +9,7 @@ import java.time.OffsetDateTime;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.stasissheet.interop.FhirWorksheetExport;
+import org.stasissheet.load.WallClock;
 import org.stasissheet.report.WorksheetPdf;
 import org.stasissheet.worksheet.Assessor;
 import org.stasissheet.worksheet.Worksheet;
@@ -61,7 +62,7 @@ final class ExportCommand extends CommandGroup {
             }
             Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, spec.commandLine().getErr());
             Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rules.dir()));
-            OffsetDateTime now = OffsetDateTime.now();
+            OffsetDateTime now = WallClock.now();
             byte[] pdf = WorksheetPdf.render(sheet, layout.options(), now, loaded.json());
             String bundle = FhirWorksheetExport.bundle(sheet, pdf, now, Optional.ofNullable(subject),
                     ToolVersion.get());

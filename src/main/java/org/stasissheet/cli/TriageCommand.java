@@ -12,7 +12,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.time.Instant;
-import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -27,6 +26,7 @@ import java.util.stream.Stream;
 import org.stasissheet.files.AtomicFiles;
 import org.stasissheet.files.FileWriteException;
 import org.stasissheet.files.WorksheetPdfs;
+import org.stasissheet.load.WallClock;
 import org.stasissheet.report.PdfOptions;
 import org.stasissheet.report.TriageRow;
 import org.stasissheet.report.TriageSummary;
@@ -267,7 +267,7 @@ final class TriageCommand implements Callable<Integer> {
                         + " (identical case file); counted once"), Optional.empty());
             }
             Worksheet sheet = Assessor.assess(loaded.value(), ruleSet);
-            byte[] pdf = WorksheetPdf.render(sheet, options, OffsetDateTime.now(), loaded.json());
+            byte[] pdf = WorksheetPdf.render(sheet, options, WallClock.now(), loaded.json());
             String pdfName = outputName(file, taken);
             TriageRow row = TriageRow.assessed(name, sheet, pdfName, options.includeIdentifiers());
             for (String w : loaded.warnings()) {

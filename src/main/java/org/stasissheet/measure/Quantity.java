@@ -19,6 +19,21 @@ public record Quantity(double value, String unit) {
         }
     }
 
+    /**
+     * The record's own equality, written out: the generated one is linked through method handles on its first
+     * call, which cost a cold command-line run about 15 ms (src/bench/RESULTS.md). Values compare as
+     * {@link Double#compare} does, as a record's do.
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Quantity q && Double.compare(value, q.value) == 0 && unit.equals(q.unit);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * Double.hashCode(value) + unit.hashCode();
+    }
+
     /** For people: the number with the unit's symbol ({@link UnitSymbols}); files and JSON use the fields. */
     @Override
     public String toString() {
