@@ -1,6 +1,9 @@
 package org.stasissheet.cli;
 
+import org.stasissheet.intake.Case;
+import org.stasissheet.load.Ahead;
 import org.stasissheet.load.CourseInputs;
+import org.stasissheet.rules.RuleSet;
 import org.stasissheet.load.Inputs;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -48,7 +51,9 @@ final class AssessCommand implements Callable<Integer> {
     /** The command's work, shared with {@link QuickPath}: read, assess, print. */
     static int print(Path caseFile, boolean json, Optional<OffsetDateTime> at, Optional<Path> rulesDir,
                      PrintWriter out, PrintWriter err) {
-        Worksheet sheet = Assessor.assess(CourseInputs.caseOf(caseFile, at, err), Inputs.ruleSet(rulesDir));
+        Ahead<RuleSet> rules = Ahead.start("rule-set", () -> Inputs.ruleSet(rulesDir)); // loads while the case is read
+        Case c = CourseInputs.caseOf(caseFile, at, err);
+        Worksheet sheet = Assessor.assess(c, rules.get());
         out.print(json ? WorksheetJson.render(sheet) : WorksheetText.render(sheet));
         out.flush();
         return ExitCode.DONE;

@@ -6,10 +6,12 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.stasissheet.load.Ahead;
 import org.stasissheet.load.WallClock;
 import org.stasissheet.report.Paper;
 import org.stasissheet.report.PdfOptions;
 import org.stasissheet.report.WorksheetPdf;
+import org.stasissheet.rules.RuleSet;
 import org.stasissheet.worksheet.Assessor;
 import org.stasissheet.worksheet.Worksheet;
 import picocli.CommandLine.Command;
@@ -48,8 +50,12 @@ final class PdfCommand implements Callable<Integer> {
     static int write(Path caseFile, Path output, PdfOptions options, Optional<Path> rulesDir, PrintWriter out,
                      PrintWriter err) {
         refuseOverwritingInput(caseFile, output);
+        // the rule set loads and the fonts are parsed while the case is read and assessed
+        Ahead<RuleSet> rules = Ahead.start("rule-set", () -> Inputs.ruleSet(rulesDir));
+        Ahead<Boolean> fonts = Ahead.start("fonts", WorksheetPdf::prepareFonts);
         Inputs.LoadedCase loaded = Inputs.loadCase(caseFile, err);
-        Worksheet sheet = Assessor.assess(loaded.value(), Inputs.ruleSet(rulesDir));
+        Worksheet sheet = Assessor.assess(loaded.value(), rules.get());
+        fonts.get();
         byte[] pdf = WorksheetPdf.render(sheet, options, WallClock.now(), loaded.json());
         OutputFiles.write(output, pdf);
         out.println("wrote " + output);

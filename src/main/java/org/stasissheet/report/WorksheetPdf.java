@@ -90,6 +90,14 @@ public final class WorksheetPdf {
     }
 
     /**
+     * Parses the embedded faces now (each is parsed once per process), so a caller can have it done on another
+     * thread while it reads and assesses the case; a render does it anyway when nobody did. True when all are there.
+     */
+    public static boolean prepareFonts() {
+        return PdfFonts.regular() != null && PdfFonts.bold() != null && PdfFonts.italic() != null;
+    }
+
+    /**
      * The PDF bytes.
      *
      * @param caseJson the case file exactly as read (stasis-case/1 JSON); without identifiers the case is
