@@ -67,7 +67,7 @@ final class EstimatesText {
         if (f.leukocrit() instanceof Estimate.Known<Leukocrit> lk) {
             Leukocrit l = lk.value();
             sb.append("  Leukocrit (approximation, never raises flow): ").append(Numbers.rounded(l.wbc(), 3))
-                    .append(" x10^9/L x ").append(Numbers.plain(l.volumeLowFl())).append("–")
+                    .append(" ×10⁹/L × ").append(Numbers.plain(l.volumeLowFl())).append("–")
                     .append(Numbers.plain(l.volumeHighFl())).append(" fL (").append(l.cellType())
                     .append(", range from the rule set) = ").append(Numbers.rounded(l.leukocritLow(), 3)).append("–")
                     .append(Numbers.rounded(l.leukocritHigh(), 3)).append("; the column uses the high end: ")

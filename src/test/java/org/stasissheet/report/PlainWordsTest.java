@@ -48,7 +48,7 @@ class PlainWordsTest {
             + "|condition|plan|baseline)\\.[a-zA-Z]");
     /** A UCUM code where a unit symbol belongs. */
     private static final Pattern UCUM_IN_PROSE = Pattern.compile("10\\*|\\{rel}|umol|\\bum\\b|mm\\[Hg]|/uL|mPa\\.s"
-            + "|\\bmeq/");
+            + "|\\bmeq/|x10\\^");
     private static final Pattern OLD_MARKS = Pattern.compile("\\[!!!]|\\[!]|\\[i]|▲");
 
     static List<Case> cases() throws IOException {
