@@ -103,9 +103,19 @@ public final class MainWindow {
         PulmonarySuggestionView.attachUnder(entryView.inputs(), "findings-pulmonaryGrade", suggestion.node());
         courseView = new CourseView(course);
         Tab sheetTab = new Tab("Worksheet", sheetView.node());
-        Tab courseTab = new Tab("Course of treatment",
-                courseView.node());
+        // the course panel joins the window when its tab is first chosen: a tab behind another is styled and laid
+        // out all the same, and the first screen shows the worksheet
+        Tab courseTab = new Tab("Course of treatment");
         courseTab.setId("tab-course");
+        courseTab.selectedProperty().addListener(new javafx.beans.InvalidationListener() {
+            @Override
+            public void invalidated(javafx.beans.Observable o) {
+                if (courseTab.isSelected()) {
+                    courseTab.selectedProperty().removeListener(this);
+                    courseTab.setContent(courseView.node());
+                }
+            }
+        });
         sideTabs.getTabs().addAll(sheetTab, courseTab);
         sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("side-tabs");
@@ -162,18 +172,30 @@ public final class MainWindow {
         MainWindow w = new MainWindow(stage, settings);
         stage.setMinWidth(Math.min(900, javafx.stage.Screen.getPrimary().getVisualBounds().getWidth()));
         stage.setMinHeight(Math.min(600, javafx.stage.Screen.getPrimary().getVisualBounds().getHeight()));
+        // Nothing to ask and no file to open: the demo case goes in before the window shows, so that the form and
+        // its worksheet are styled and laid out in one pass. A draft to offer needs the window shown first.
+        boolean demoFirst = file.isEmpty() && w.drafts.crashedDrafts().isEmpty();
+        if (demoFirst) {
+            w.loadDemo();
+        }
         stage.show();
-        if (w.actions.offerDraft()) {
+        if (demoFirst) {
+            // loaded above
+        } else if (w.actions.offerDraft()) {
             file.ifPresent(w.actions::openRecent);
         } else if (file.isPresent()) {
             w.actions.openFile(file.get());
         } else {
-            w.session.load(Samples.read(settings.demoSample())
-                    .flatMap(b -> FormJson.read(b, w.preferences.get().units()))
-                    .orElse(FormJson.blank(w.preferences.get().units())), Optional.empty());
+            w.loadDemo();
         }
         w.actions.markRunning();
         return w;
+    }
+
+    private void loadDemo() {
+        session.load(Samples.read(settings.demoSample())
+                .flatMap(b -> FormJson.read(b, preferences.get().units()))
+                .orElse(FormJson.blank(preferences.get().units())), Optional.empty());
     }
 
     public CaseSession session() {
