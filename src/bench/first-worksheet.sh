@@ -4,6 +4,8 @@
 # without arguments starts it). Target: <= 2.0 s on this machine class (an absolute figure: a person waits it).
 #
 #   mvn -q package -DskipTests && target/stasis-sheet --make-archive && mvn -q -o test-compile
+#   (--make-archive trains the form's start only where a display is present: run it from a desktop session, or
+#   with DISPLAY pointing at an Xvfb server; the "archive:" line below says what the archive was trained on)
 #   sh src/bench/first-worksheet.sh [RUNS]      (default 10; each run a fresh JVM and a fresh data folder)
 #
 # Display: an Xvfb server of its own when Xvfb is installed (the real GTK glass; apt-get install xvfb), else
@@ -31,7 +33,11 @@ cp="$root/target/stasis-sheet.jar:$work/bench.jar"
 opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto"
 if [ -f "$root/target/stasis-sheet.jsa" ]; then
     opts="$opts -XX:SharedArchiveFile=$root/target/stasis-sheet.jsa -Xlog:cds=off -Xlog:cds+dynamic=off"
-    archive="target/stasis-sheet.jsa (trained on a pdf)"
+    if [ -f "$root/target/stasis-sheet.jsa.trained" ]; then
+        archive="target/stasis-sheet.jsa ($(cat "$root/target/stasis-sheet.jsa.trained"))"
+    else
+        archive="target/stasis-sheet.jsa (training not recorded)"
+    fi
 else
     archive="none (run target/stasis-sheet --make-archive)"
 fi

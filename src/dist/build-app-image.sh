@@ -13,8 +13,9 @@
 #   - stasis-sheet.jar and every other runtime library from target/lib (not the JavaFX jars: they are in the runtime);
 #   - bin/stasis-sheet from src/dist/app/launcher.sh: the options of src/main/dist/stasis-sheet (quick compiler,
 #     serial collector) on the image's own runtime, and an application
-#     class-data archive made in place by lib/app/make-archive.sh (one `pdf` of a demo case); the .deb makes its
-#     own after installing, since an archive is valid only where it was made.
+#     class-data archive made in place by lib/app/make-archive.sh (the hidden training run: the common commands on
+#     a demo case, and the form's first worksheet where a display is present); the .deb makes its own after
+#     installing, since an archive is valid only where it was made.
 # Decision support only: it supports, and never replaces, clinical judgement, local protocols and licensed practice.
 set -eu
 root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P)
@@ -99,11 +100,13 @@ elif command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1;
     echo "build-app-image: building the .deb"
     mkdir "$work/held"
     [ ! -f "$image/lib/app/$name.jsa" ] || mv "$image/lib/app/$name.jsa" "$work/held/"
+    [ ! -f "$image/lib/app/$name.jsa.trained" ] || mv "$image/lib/app/$name.jsa.trained" "$work/held/"
     "${bin}jpackage" --type deb --app-image "$image" --name "$name" --app-version "$version" \
         --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
         --vendor "Stasis Sheet contributors" --linux-package-name "$name" --linux-app-category science \
         --linux-package-deps libgtk-3-0 --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
     [ ! -f "$work/held/$name.jsa" ] || mv "$work/held/$name.jsa" "$image/lib/app/"
+    [ ! -f "$work/held/$name.jsa.trained" ] || mv "$work/held/$name.jsa.trained" "$image/lib/app/"
     echo "build-app-image: wrote $(ls "$dist"/*.deb)"
 else
     echo "build-app-image: no .deb (dpkg-deb or fakeroot is not installed); the application image is complete"

@@ -6,6 +6,7 @@ package org.stasissheet;
  */
 final class FormLauncher {
     static final String FORM_CLASS = "org.stasissheet.ui.FormApp";
+    static final String TRAINING_CLASS = "org.stasissheet.ui.FormTraining";
 
     private FormLauncher() {
     }
@@ -19,6 +20,18 @@ final class FormLauncher {
             Class.forName(FORM_CLASS).getMethod("open", String[].class).invoke(null, (Object) args);
         } catch (ReflectiveOperationException e) {
             throw new IllegalStateException("the form could not be started", e);
+        }
+    }
+
+    /**
+     * The form's part of {@link ArchiveTraining}: starts the form, waits for its first worksheet, closes it.
+     * Returns an empty string when it did, else why not.
+     */
+    static String train(long timeoutSeconds) {
+        try {
+            return (String) Class.forName(TRAINING_CLASS).getMethod("run", long.class).invoke(null, timeoutSeconds);
+        } catch (ReflectiveOperationException e) {
+            return "the form could not be started: " + e;
         }
     }
 }

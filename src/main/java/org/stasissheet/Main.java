@@ -14,6 +14,10 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        if (ArchiveTraining.requested()) {
+            // the launcher's --make-archive: exit here, the form's toolkit may leave threads behind
+            System.exit(ArchiveTraining.run(args, System.getenv(), System.err));
+        }
         Optional<String> file = FileArgument.of(args);
         if (file.isPresent()) {
             Optional<String> problem = FileArgument.problem(file.get());

@@ -7,6 +7,7 @@ import org.stasissheet.ui.app.CaseSession;
 import org.stasissheet.files.DataFolder;
 import org.stasissheet.ui.app.FormSettings;
 import org.stasissheet.ui.app.FxShell;
+import org.stasissheet.ui.app.HeadStart;
 import org.stasissheet.ui.app.MainWindow;
 import org.stasissheet.ui.app.ShutdownGuard;
 import org.stasissheet.load.Inputs;
@@ -19,8 +20,13 @@ import org.stasissheet.ui.draft.Autosaver;
 public final class FormApp extends Application {
     /** Starts the toolkit and opens the form window; returns when the last window has closed. */
     public static void open(String[] args) {
+        // the preferences, the rule set and the demo case need no toolkit: they are read while JavaFX starts
+        headStart = HeadStart.begin(userSettings());
         Application.launch(FormApp.class, args);
     }
+
+    /** Read ahead by {@link #open}; a start through {@code Application.launch} alone reads them in {@link #start}. */
+    private static volatile HeadStart headStart;
 
     /** The settings of a real session: the user's data folder, the desktop's dialogs, the system clock. */
     public static FormSettings userSettings() {
@@ -35,6 +41,10 @@ public final class FormApp extends Application {
         java.util.Optional<java.nio.file.Path> file = getParameters().getRaw().stream().findFirst()
                 .map(java.nio.file.Path::of);
         // SIGTERM (logout, kill) saves the draft instead of losing the last edits
-        ShutdownGuard.install(MainWindow.open(stage, userSettings(), file));
+        FormSettings settings = userSettings();
+        HeadStart head = headStart;
+        headStart = null;
+        ShutdownGuard.install(head == null ? MainWindow.open(stage, settings, file)
+                : MainWindow.open(stage, settings, file, head));
     }
 }

@@ -67,19 +67,24 @@ public final class MainWindow {
     private final CourseModel course;
     private final CourseView courseView;
     private final TabPane sideTabs = new TabPane();
+    /** The demo case as read at the start, in the units the preferences start new entries in. */
+    private final Optional<org.stasissheet.ui.entry.FormState> demo;
+    private final UnitSystem demoUnits;
 
-    private MainWindow(Stage stage, FormSettings settings) {
+    private MainWindow(Stage stage, FormSettings settings, HeadStart.Read read) {
         this.stage = Objects.requireNonNull(stage, "stage");
         this.settings = Objects.requireNonNull(settings, "settings");
+        this.demo = read.demo();
+        this.demoUnits = read.preferences().units();
         PreferencesStore preferenceStore = new PreferencesStore(settings.dataFolder());
-        preferences = new SimpleObjectProperty<>(this, "preferences", preferenceStore.load());
+        preferences = new SimpleObjectProperty<>(this, "preferences", read.preferences());
         drafts = new DraftStore(settings.dataFolder());
         background = new Background();
         shell = settings.shell().apply(stage);
 
         EntryViewModel entry = new EntryViewModel(preferences.get().units());
         labLanding = new LabLanding(entry);
-        RuleLoad first = RuleLoad.first(settings.rules(), preferences.get().ruleFolder());
+        RuleLoad first = read.rules();
         session = new CaseSession(entry, first.rules(), settings.recomputeDelay());
         course = new CourseModel(session);
         // a course's draft holds the whole course besides the form, so a crash loses neither; the pause restarts on
@@ -103,9 +108,19 @@ public final class MainWindow {
         PulmonarySuggestionView.attachUnder(entryView.inputs(), "findings-pulmonaryGrade", suggestion.node());
         courseView = new CourseView(course);
         Tab sheetTab = new Tab("Worksheet", sheetView.node());
-        Tab courseTab = new Tab("Course of treatment",
-                courseView.node());
+        // the course panel joins the window when its tab is first chosen: a tab behind another is styled and laid
+        // out all the same, and the first screen shows the worksheet
+        Tab courseTab = new Tab("Course of treatment");
         courseTab.setId("tab-course");
+        courseTab.selectedProperty().addListener(new javafx.beans.InvalidationListener() {
+            @Override
+            public void invalidated(javafx.beans.Observable o) {
+                if (courseTab.isSelected()) {
+                    courseTab.selectedProperty().removeListener(this);
+                    courseTab.setContent(courseView.node());
+                }
+            }
+        });
         sideTabs.getTabs().addAll(sheetTab, courseTab);
         sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("side-tabs");
@@ -159,21 +174,40 @@ public final class MainWindow {
      * the command line) instead of the demo case; after a restored draft it asks before replacing it.
      */
     public static MainWindow open(Stage stage, FormSettings settings, Optional<Path> file) {
-        MainWindow w = new MainWindow(stage, settings);
+        return open(stage, settings, file, HeadStart.now(settings));
+    }
+
+    /** As {@link #open(Stage, FormSettings, Optional)}, with the start-up files read ahead ({@link HeadStart}). */
+    public static MainWindow open(Stage stage, FormSettings settings, Optional<Path> file, HeadStart head) {
+        MainWindow w = new MainWindow(stage, settings, head.get());
         stage.setMinWidth(Math.min(900, javafx.stage.Screen.getPrimary().getVisualBounds().getWidth()));
         stage.setMinHeight(Math.min(600, javafx.stage.Screen.getPrimary().getVisualBounds().getHeight()));
+        // Nothing to ask and no file to open: the demo case goes in before the window shows, so that the form and
+        // its worksheet are styled and laid out in one pass. A draft to offer needs the window shown first.
+        boolean demoFirst = file.isEmpty() && w.drafts.crashedDrafts().isEmpty();
+        if (demoFirst) {
+            w.loadDemo();
+        }
         stage.show();
-        if (w.actions.offerDraft()) {
+        if (demoFirst) {
+            // loaded above
+        } else if (w.actions.offerDraft()) {
             file.ifPresent(w.actions::openRecent);
         } else if (file.isPresent()) {
             w.actions.openFile(file.get());
         } else {
-            w.session.load(Samples.read(settings.demoSample())
-                    .flatMap(b -> FormJson.read(b, w.preferences.get().units()))
-                    .orElse(FormJson.blank(w.preferences.get().units())), Optional.empty());
+            w.loadDemo();
         }
         w.actions.markRunning();
         return w;
+    }
+
+    private void loadDemo() {
+        UnitSystem units = preferences.get().units();
+        // read ahead in the units the preferences had then; read again should they have changed since
+        Optional<org.stasissheet.ui.entry.FormState> state = units == demoUnits ? demo
+                : Samples.read(settings.demoSample()).flatMap(b -> FormJson.read(b, units));
+        session.load(state.orElse(FormJson.blank(units)), Optional.empty());
     }
 
     public CaseSession session() {

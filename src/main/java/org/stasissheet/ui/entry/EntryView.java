@@ -47,6 +47,8 @@ public final class EntryView {
     /** What Enter visits, in order: every field's own input (pickers and switches included), no unit pickers. */
     private final List<Control> enterOrder = new ArrayList<>();
     private final Clock clock;
+    /** Each section's grid of fields, and the collapsible group that shows it. */
+    private final java.util.Map<Node, TitledPane> sectionOf = new java.util.HashMap<>();
 
     /**
      * @param clock the current date and time and the time zone, for the time of the assessment (its "now"
@@ -106,12 +108,29 @@ public final class EntryView {
         for (FieldSpec spec : FormFields.of(s)) {
             row = addRow(grid, row, model.field(spec.path()));
         }
-        TitledPane pane = new TitledPane(s.title(), grid);
+        TitledPane pane = new TitledPane(s.title(), null);
         // no sliding: a field focused in a section that opens must be scrolled to where it ends up, at once
         pane.setAnimated(false);
         pane.setId("section-" + s.name().toLowerCase(java.util.Locale.ROOT));
         pane.setExpanded(s.expandedAtStart());
         pane.setAccessibleText(s.title());
+        sectionOf.put(grid, pane);
+        if (s.expandedAtStart()) {
+            pane.setContent(grid);
+        } else {
+            // a closed section's fields (built, bound and in the tab order all the same) join the window when it
+            // first opens: until then the first screen does not style and lay out hundreds of hidden nodes
+            javafx.beans.InvalidationListener attach = new javafx.beans.InvalidationListener() {
+                @Override
+                public void invalidated(javafx.beans.Observable o) {
+                    if (pane.isExpanded()) {
+                        pane.expandedProperty().removeListener(this);
+                        pane.setContent(grid);
+                    }
+                }
+            };
+            pane.expandedProperty().addListener(attach);
+        }
         return pane;
     }
 
@@ -364,9 +383,11 @@ public final class EntryView {
         return model.fields().stream().filter(f -> f.spec().id().equals(input.getId())).findFirst();
     }
 
-    private static void expandSectionOf(Node n) {
+    /** Opens the section {@code n} is in (its grid may not be in the window yet: see {@link #section}). */
+    private void expandSectionOf(Node n) {
         for (Node p = n.getParent(); p != null; p = p.getParent()) {
-            if (p instanceof TitledPane t) {
+            TitledPane t = sectionOf.get(p);
+            if (t != null) {
                 t.setExpanded(true);
                 return;
             }
