@@ -24,8 +24,8 @@ import org.stasissheet.files.DataFolder;
  *
  * <p>Paths, in order: {@code assess} (text), {@code assess --json}, {@code note} and {@code pdf} of the given case,
  * in-process; then, where a display is present, the form started exactly as a user starts it, on its demo case,
- * until the first worksheet is laid out, and closed the normal way. Without a display the command-line paths are
- * still trained and the run still succeeds (it says so on standard error). Everything it writes goes to a scratch
+ * until the first worksheet is laid out, and closed the normal way. Without a display, or with one that cannot be
+ * opened, the command-line paths are still trained and the run still succeeds (it says so on standard error). Everything it writes goes to a scratch
  * folder of its own, removed at the end: the user's data folder (preferences, drafts) is never touched.
  */
 final class ArchiveTraining {
@@ -86,6 +86,13 @@ final class ArchiveTraining {
                 return ExitCode.DONE;
             }
             String form = FormLauncher.train(FORM_TIMEOUT_SECONDS);
+            if (form.startsWith(FormLauncher.NO_WINDOW)) {
+                // DISPLAY set but no usable display (a closed X session, no GTK): as without a display
+                report.println("archive training: " + String.join(", ", trained)
+                        + " (the form could not open a window, so it was not trained: "
+                        + form.substring(FormLauncher.NO_WINDOW.length()) + ")");
+                return ExitCode.DONE;
+            }
             if (!form.isEmpty()) {
                 report.println("archive training: " + String.join(", ", trained) + "; the form did not train: "
                         + form);

@@ -7,6 +7,8 @@ package org.stasissheet;
 final class FormLauncher {
     static final String FORM_CLASS = "org.stasissheet.ui.FormApp";
     static final String TRAINING_CLASS = "org.stasissheet.ui.FormTraining";
+    /** How the form's training answers when the toolkit could not open a window ({@code FormTraining.NO_WINDOW}). */
+    static final String NO_WINDOW = "no window: ";
 
     private FormLauncher() {
     }
@@ -25,7 +27,7 @@ final class FormLauncher {
 
     /**
      * The form's part of {@link ArchiveTraining}: starts the form, waits for its first worksheet, closes it.
-     * Returns an empty string when it did, else why not.
+     * Returns an empty string when it did, else why not ({@link #NO_WINDOW} first when no window could open).
      */
     static String train(long timeoutSeconds) {
         try {

@@ -99,6 +99,17 @@ class ArchiveTrainingTest {
     }
 
     @Test
+    @DisplayName("a display that is set but cannot be opened: the command line is trained, the run still exits 0")
+    void unusableDisplay_trainsTheCommandLine() throws Exception {
+        Run run = train(List.of(), ":987");
+        assertEquals(0, run.exit(), run.said());
+        assertTrue(run.said().contains("archive training: assess, assess --json, note, pdf (the form could not open a"
+                + " window, so it was not trained: "), run.said());
+        assertTrue(archivedClasses(run.archive()).contains("org.stasissheet.cli.NoteCommand"));
+        assertUntouched(run);
+    }
+
+    @Test
     @DisplayName("the training needs a readable case file and says so otherwise")
     void withoutACase_refuses() throws Exception {
         java.io.ByteArrayOutputStream said = new java.io.ByteArrayOutputStream();
@@ -113,6 +124,11 @@ class ArchiveTrainingTest {
 
     /** A training run in a fresh JVM with an empty home and data folder, and without DISPLAY. */
     Run train(List<String> options) throws IOException, InterruptedException {
+        return train(options, null);
+    }
+
+    /** The same with DISPLAY set to {@code display} (none when null). */
+    Run train(List<String> options, String display) throws IOException, InterruptedException {
         Path archive = dir.resolve("trained.jsa");
         Path home = Files.createDirectories(dir.resolve("home"));
         List<String> command = new ArrayList<>(List.of(java(), "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC",
@@ -124,6 +140,9 @@ class ArchiveTrainingTest {
                 .redirectOutput(dir.resolve("said.txt").toFile());
         pb.environment().remove("DISPLAY");
         pb.environment().remove("WAYLAND_DISPLAY");
+        if (display != null) {
+            pb.environment().put("DISPLAY", display);
+        }
         pb.environment().put("HOME", home.toString());
         pb.environment().put("XDG_DATA_HOME", home.resolve("xdg").toString());
         Process p = pb.start();

@@ -22,7 +22,13 @@ public final class FormTraining {
     private FormTraining() {
     }
 
-    /** Returns an empty string when the first worksheet was laid out and the form closed, else why not. */
+    /** How an answer starts when the toolkit could not open a window at all (a display that is set but unusable). */
+    public static final String NO_WINDOW = "no window: ";
+
+    /**
+     * Returns an empty string when the first worksheet was laid out and the form closed, else why not; starting
+     * with {@link #NO_WINDOW} when the toolkit could not start.
+     */
     public static String run(long timeoutSeconds) {
         CountDownLatch shown = new CountDownLatch(1);
         CountDownLatch closed = new CountDownLatch(1);
@@ -55,8 +61,8 @@ public final class FormTraining {
         watcher.start();
         try {
             FormApp.open(new String[0]);
-        } catch (RuntimeException e) {
-            return "the form could not start: " + e;
+        } catch (RuntimeException | LinkageError e) {
+            return NO_WINDOW + e;
         }
         if (shown.getCount() > 0) {
             return "the first worksheet was not laid out within " + timeoutSeconds + " s";

@@ -289,11 +289,13 @@ public final class EntryView {
                 fixes.getChildren().add(b);
             }
         });
-        VBox box = new VBox(2, message, fixes);
+        VBox box = new VBox(2);
         box.getStyleClass().add("problem-box");
         box.setPadding(new Insets(0, 0, 4, 0));
-        box.visibleProperty().bind(field.problemProperty().isNotEmpty());
+        javafx.beans.binding.BooleanBinding shown = field.problemProperty().isNotEmpty();
+        box.visibleProperty().bind(shown);
         box.managedProperty().bind(box.visibleProperty());
+        joinWhenShown(box, shown, message, fixes);
         HBox.setHgrow(box, Priority.ALWAYS);
         return box;
     }
@@ -330,11 +332,35 @@ public final class EntryView {
                 takes.getChildren().add(b);
             }
         });
-        VBox box = new VBox(2, message, takes);
+        VBox box = new VBox(2);
         box.getStyleClass().add("reading-box");
-        box.visibleProperty().bind(field.readingProperty().isNotEmpty());
+        javafx.beans.binding.BooleanBinding shown = field.readingProperty().isNotEmpty();
+        box.visibleProperty().bind(shown);
         box.managedProperty().bind(box.visibleProperty());
+        joinWhenShown(box, shown, message, takes);
         return box;
+    }
+
+    /**
+     * Puts a row's message and its buttons into their box the first time the box shows. Most rows never have a
+     * problem or a question, and nodes that are in the window are styled and laid out even while hidden: with the
+     * messages of every row in it, the first screen had twice the nodes. {@code shown} is the binding the box's
+     * visibility is bound to, which keeps it (and so this listener) alive as long as the box.
+     */
+    private static void joinWhenShown(VBox box, javafx.beans.binding.BooleanBinding shown, Node... parts) {
+        if (shown.get()) {
+            box.getChildren().addAll(parts);
+            return;
+        }
+        shown.addListener(new javafx.beans.InvalidationListener() {
+            @Override
+            public void invalidated(javafx.beans.Observable o) {
+                if (shown.get()) {
+                    shown.removeListener(this);
+                    box.getChildren().addAll(parts);
+                }
+            }
+        });
     }
 
     /**

@@ -9,7 +9,8 @@ import javafx.scene.control.ListCell;
 
 /**
  * Ties a picker to a text property holding a code, both ways. A code the picker does not offer (read from a file)
- * is added as an item of its own, so nothing read is lost or silently replaced.
+ * is added as an item of its own, so nothing read is lost or silently replaced. The picker gets the lean skin
+ * ({@link LeanPickerSkin}): its closed list is not in the window.
  */
 final class PickerBinding {
     private PickerBinding() {
@@ -21,6 +22,7 @@ final class PickerBinding {
         box.getItems().setAll(items);
         box.setCellFactory(v -> cell(listed));
         box.setButtonCell(cell(shown));
+        box.setSkin(new LeanPickerSkin<>(box, shown));
         Runnable fromModel = () -> {
             String c = code.get() == null ? "" : code.get();
             T item = box.getItems().stream().filter(i -> codeOf.apply(i).equals(c)).findFirst().orElse(null);

@@ -44,13 +44,23 @@ class FirstScreenTest {
 
     @Start
     void start(Stage stage) {
-        stage.addEventHandler(WindowEvent.WINDOW_SHOWN, e -> {
-            Parent verdicts = (Parent) stage.getScene().lookup("#verdicts");
-            atShow.add("verdicts " + verdicts.getChildrenUnmodifiable().size());
-            atShow.add(((Label) stage.getScene().lookup("#standing-caution")).getText());
-            atShow.add(((TextField) stage.getScene().lookup("#patient-label")).getText());
-        });
-        window = MainWindow.open(stage, FormHarness.settings(data, new ScriptedShell()));
+        // (the test framework shares this stage with later test classes: the handler goes once it has looked)
+        javafx.event.EventHandler<WindowEvent> look = new javafx.event.EventHandler<>() {
+            @Override
+            public void handle(WindowEvent e) {
+                stage.removeEventHandler(WindowEvent.WINDOW_SHOWN, this);
+                Parent verdicts = (Parent) stage.getScene().lookup("#verdicts");
+                atShow.add("verdicts " + verdicts.getChildrenUnmodifiable().size());
+                atShow.add(((Label) stage.getScene().lookup("#standing-caution")).getText());
+                atShow.add(((TextField) stage.getScene().lookup("#patient-label")).getText());
+            }
+        };
+        stage.addEventHandler(WindowEvent.WINDOW_SHOWN, look);
+        try {
+            window = MainWindow.open(stage, FormHarness.settings(data, new ScriptedShell()));
+        } finally {
+            stage.removeEventHandler(WindowEvent.WINDOW_SHOWN, look);
+        }
     }
 
     @Test
@@ -92,6 +102,19 @@ class FirstScreenTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(((TitledPane) robot.lookup("#section-baseline").query()).isExpanded());
         assertEquals(FormFields.of(Section.BASELINE).get(0).id(), window.stage().getScene().getFocusOwner().getId());
+    }
+
+    @Test
+    @DisplayName("a row's message joins the window when the row first has one, and shows the reader's words")
+    void rowMessageJoinsWhenNeeded(FxRobot robot) throws Exception {
+        assertTrue(robot.lookup("#labs-wbc-problem").tryQuery().isEmpty(), "no message, no node");
+        FormHarness.fx(() -> {
+            window.session().entry().field("labs.wbc").textProperty().set("150000");
+            window.session().recomputeNow();
+        });
+        Label problem = robot.lookup("#labs-wbc-problem").query();
+        assertTrue(problem.getParent().isVisible());
+        assertTrue(problem.getText().startsWith("PROBLEM: "), problem.getText());
     }
 
     @Test
