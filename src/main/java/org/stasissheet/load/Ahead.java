@@ -27,6 +27,13 @@ public final class Ahead<T> implements Supplier<T> {
         return new Ahead<>(task);
     }
 
+    /** Does {@code work} here and now; {@link #get()} then gives its result or throws its failure, as for {@link #start}. */
+    public static <T> Ahead<T> now(Callable<T> work) {
+        FutureTask<T> task = new FutureTask<>(work);
+        task.run();
+        return new Ahead<>(task);
+    }
+
     /** The result, once the work is done; an unchecked exception or error of the work is thrown as it was. */
     @Override
     public T get() {

@@ -2,9 +2,7 @@ package org.stasissheet.ui.app;
 
 import java.util.Objects;
 import java.util.Optional;
-import java.util.concurrent.CompletionException;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.FutureTask;
+import org.stasissheet.load.Ahead;
 import org.stasissheet.ui.entry.FormJson;
 import org.stasissheet.ui.entry.FormState;
 
@@ -24,45 +22,25 @@ public final class HeadStart {
         }
     }
 
-    private final FutureTask<Read> task;
+    private final Ahead<Read> read;
 
-    private HeadStart(FutureTask<Read> task) {
-        this.task = task;
+    private HeadStart(Ahead<Read> read) {
+        this.read = read;
     }
 
     /** Starts reading on a thread of its own and returns at once. */
     public static HeadStart begin(FormSettings settings) {
-        HeadStart h = new HeadStart(new FutureTask<>(() -> read(settings)));
-        Thread t = new Thread(h.task, "form-head-start");
-        t.setDaemon(true);
-        t.start();
-        return h;
+        return new HeadStart(Ahead.start("form-head-start", () -> read(settings)));
     }
 
     /** Reads on the calling thread, before returning. */
     static HeadStart now(FormSettings settings) {
-        HeadStart h = new HeadStart(new FutureTask<>(() -> read(settings)));
-        h.task.run();
-        return h;
+        return new HeadStart(Ahead.now(() -> read(settings)));
     }
 
     /** The values; a failure reading them is thrown here, on the caller's thread, as if read there. */
     Read get() {
-        try {
-            return task.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while the form's start-up files were read", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException r) {
-                throw r;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new CompletionException(cause);
-        }
+        return read.get();
     }
 
     private static Read read(FormSettings settings) {

@@ -56,6 +56,6 @@ class HeadStartTest {
             throw broken;
         }));
         assertSame(broken, assertThrows(IllegalStateException.class, h::get));
-        assertEquals("form-head-start", readOn.get(), "read on a thread of its own");
+        assertEquals("stasis-form-head-start", readOn.get(), "read on a thread of its own");
     }
 }
