@@ -15,10 +15,11 @@ root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
 runs=${1:-20}
 if [ -n "${JAVA_HOME:-}" ]; then java="$JAVA_HOME/bin/java"; jar="$JAVA_HOME/bin/jar"; else java=java; jar=jar; fi
 launcher="$root/target/stasis-sheet"
-archive="$root/target/stasis-sheet.jsa"
+# the floor runs with the archive the launcher gives `pdf` (src/main/dist/stasis-sheet keeps one per way of starting)
+archive="$root/target/stasis-sheet-pdf.jsa"
 image="$root/target/dist/stasis-sheet/bin/stasis-sheet"
 [ -x "$launcher" ] || { echo "no $launcher: run 'mvn -q package -DskipTests'" >&2; exit 1; }
-[ -f "$archive" ] || { echo "no $archive: run 'target/stasis-sheet --make-archive' (both sides use it)" >&2; exit 1; }
+[ -f "$archive" ] || { echo "no $archive: run 'target/stasis-sheet --make-archive' (pdf and the floor use it)" >&2; exit 1; }
 [ -f "$root/target/bench-classes/org/stasissheet/bench/PdfStackFloor.class" ] \
     || { echo "no stack-floor probe: run 'mvn -q -o -Pbench test-compile'" >&2; exit 1; }
 . "$root/src/bench/timing.sh"

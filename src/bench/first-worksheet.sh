@@ -10,7 +10,7 @@
 #
 # Display: an Xvfb server of its own when Xvfb is installed (the real GTK glass; apt-get install xvfb), else
 # Monocle headless from the test class path. Options as the launcher gives the form: the quick compiler only,
-# the serial collector and target/stasis-sheet.jsa when present. Every run is interleaved with a `java -version`, so the load the machine
+# the serial collector and the form's archive (target/stasis-sheet-form.jsa) when present. Every run is interleaved with a `java -version`, so the load the machine
 # was under shows in the same table. JAVA_HOME picks the runtime.
 set -u
 root=$(CDPATH='' cd -- "$(dirname -- "$0")/../.." && pwd -P) || exit 1
@@ -31,12 +31,15 @@ trap cleanup EXIT INT TERM
 (cd "$root/target/test-classes" && "$jar" cf "$work/bench.jar" org/stasissheet/ui/FirstWorksheetBench*.class) || exit 1
 cp="$root/target/stasis-sheet.jar:$work/bench.jar"
 opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto"
-if [ -f "$root/target/stasis-sheet.jsa" ]; then
-    opts="$opts -XX:SharedArchiveFile=$root/target/stasis-sheet.jsa -Xlog:cds=off -Xlog:cds+dynamic=off"
-    if [ -f "$root/target/stasis-sheet.jsa.trained" ]; then
-        archive="target/stasis-sheet.jsa ($(cat "$root/target/stasis-sheet.jsa.trained"))"
+# the archive the launcher gives the form: its own, else the command line's
+form_archive="$root/target/stasis-sheet-form.jsa"
+[ -f "$form_archive" ] || form_archive="$root/target/stasis-sheet.jsa"
+if [ -f "$form_archive" ]; then
+    opts="$opts -XX:SharedArchiveFile=$form_archive -Xlog:cds=off -Xlog:cds+dynamic=off"
+    if [ -f "$form_archive.trained" ]; then
+        archive="target/$(basename "$form_archive") ($(cat "$form_archive.trained"))"
     else
-        archive="target/stasis-sheet.jsa (training not recorded)"
+        archive="target/$(basename "$form_archive") (training not recorded)"
     fi
 else
     archive="none (run target/stasis-sheet --make-archive)"

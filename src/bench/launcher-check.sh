@@ -36,4 +36,12 @@ printf 'not an archive at all' > "$work/stasis-sheet.jsa"; wc -c < "$work/stasis
 check "garbage archive of the recorded size"
 rm -f "$work/stasis-sheet.jsa.size"; "$work/stasis-sheet" --make-archive assess "$demo" >/dev/null; rm -f "$work/stasis-sheet.jsa.size"
 check "archive without its size record"
+# pdf takes an archive of its own: a garbage one of the recorded size must not break it either
+printf 'not an archive at all' > "$work/stasis-sheet-pdf.jsa"
+wc -c < "$work/stasis-sheet-pdf.jsa" | tr -d ' ' > "$work/stasis-sheet-pdf.jsa.size"
+if "$work/stasis-sheet" pdf "$demo" -o "$work/out.pdf" >/dev/null 2>"$work/err" && [ "$(head -c 5 "$work/out.pdf")" = "%PDF-" ]; then
+    echo "ok   garbage pdf archive"
+else
+    echo "FAIL garbage pdf archive"; head -n 3 "$work/err"; failed=1
+fi
 exit $failed

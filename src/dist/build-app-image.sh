@@ -99,14 +99,16 @@ elif command -v dpkg-deb >/dev/null 2>&1 && command -v fakeroot >/dev/null 2>&1;
     # the archive made here is valid only here: the package's post-install makes its own under /opt
     echo "build-app-image: building the .deb"
     mkdir "$work/held"
-    [ ! -f "$image/lib/app/$name.jsa" ] || mv "$image/lib/app/$name.jsa" "$work/held/"
-    [ ! -f "$image/lib/app/$name.jsa.trained" ] || mv "$image/lib/app/$name.jsa.trained" "$work/held/"
+    for f in "$image/lib/app/$name"*.jsa "$image/lib/app/$name"*.jsa.trained; do
+        [ ! -f "$f" ] || mv "$f" "$work/held/"
+    done
     "${bin}jpackage" --type deb --app-image "$image" --name "$name" --app-version "$version" \
         --description "Hyperviscosity and leukostasis worksheet (decision support only)" \
         --vendor "Stasis Sheet contributors" --linux-package-name "$name" --linux-app-category science \
         --linux-package-deps libgtk-3-0 --linux-shortcut --resource-dir "$root/src/dist/deb" --dest "$dist" >/dev/null
-    [ ! -f "$work/held/$name.jsa" ] || mv "$work/held/$name.jsa" "$image/lib/app/"
-    [ ! -f "$work/held/$name.jsa.trained" ] || mv "$work/held/$name.jsa.trained" "$image/lib/app/"
+    for f in "$work/held/"*; do
+        [ ! -f "$f" ] || mv "$f" "$image/lib/app/"
+    done
     echo "build-app-image: wrote $(ls "$dist"/*.deb)"
 else
     echo "build-app-image: no .deb (dpkg-deb or fakeroot is not installed); the application image is complete"

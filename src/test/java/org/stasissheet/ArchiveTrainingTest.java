@@ -110,10 +110,51 @@ class ArchiveTrainingTest {
     }
 
     @Test
+    @DisplayName("each part trains its own paths: the text commands, the pdf, the form; none holds JavaFX but the form's")
+    void partsTrainTheirOwnPaths() throws Exception {
+        Run commands = train("commands", List.of(), null);
+        assertEquals(0, commands.exit(), commands.said());
+        assertTrue(commands.said().contains("archive training: assess, assess --json"), commands.said());
+        List<String> inCommands = archivedClasses(commands.archive());
+        assertTrue(inCommands.contains("org.stasissheet.report.WorksheetText"));
+        assertTrue(inCommands.contains("org.stasissheet.report.WorksheetJson"));
+        assertFalse(inCommands.stream().anyMatch(c -> c.startsWith("picocli.")), "the quick path needs no picocli");
+        assertFalse(inCommands.contains("org.stasissheet.report.PdfFonts"), "no PDF classes in the text archive");
+        assertTrue(inCommands.stream().noneMatch(c -> c.startsWith("javafx.")));
+        Files.delete(commands.archive());
+
+        Run pdf = train("pdf", List.of(), null);
+        assertEquals(0, pdf.exit(), pdf.said());
+        assertTrue(pdf.said().contains("archive training: pdf"), pdf.said());
+        List<String> inPdf = archivedClasses(pdf.archive());
+        assertTrue(inPdf.contains("org.stasissheet.report.PdfFonts"));
+        assertTrue(inPdf.stream().noneMatch(c -> c.startsWith("javafx.")));
+        assertUntouched(pdf);
+    }
+
+    @Test
+    @DisplayName("the form's part without a display trains nothing and says so with its own exit code")
+    void formPartWithoutDisplay_nothingTrained() throws Exception {
+        Run run = train("form", List.of(), null);
+        assertEquals(ArchiveTraining.NOTHING_TRAINED, run.exit(), run.said());
+        assertTrue(run.said().contains("no display: the form was not trained"), run.said());
+        assertUntouched(run);
+    }
+
+    @Test
+    @DisplayName("a part that does not exist is refused, naming the parts there are")
+    void unknownPart_refused() throws Exception {
+        Run run = train("everything", List.of(), null);
+        assertEquals(org.stasissheet.cli.ExitCode.INVALID_INPUT, run.exit(), run.said());
+        assertTrue(run.said().contains("commands, pdf, form"), run.said());
+    }
+
+    @Test
     @DisplayName("the training needs a readable case file and says so otherwise")
     void withoutACase_refuses() throws Exception {
         java.io.ByteArrayOutputStream said = new java.io.ByteArrayOutputStream();
-        int code = ArchiveTraining.run(new String[] {dir.resolve("none.json").toString()}, Map.of(),
+        int code = ArchiveTraining.run(ArchiveTraining.Part.ALL, new String[] {dir.resolve("none.json").toString()},
+                Map.of(),
                 new java.io.PrintStream(said, true, StandardCharsets.UTF_8));
         assertEquals(org.stasissheet.cli.ExitCode.INVALID_INPUT, code);
         assertTrue(said.toString(StandardCharsets.UTF_8).contains("give one case file"));
@@ -129,11 +170,16 @@ class ArchiveTrainingTest {
 
     /** The same with DISPLAY set to {@code display} (none when null). */
     Run train(List<String> options, String display) throws IOException, InterruptedException {
+        return train("true", options, display);
+    }
+
+    /** A run of one part ({@code -Dstasis.archiveTraining=PART}). */
+    Run train(String part, List<String> options, String display) throws IOException, InterruptedException {
         Path archive = dir.resolve("trained.jsa");
         Path home = Files.createDirectories(dir.resolve("home"));
         List<String> command = new ArrayList<>(List.of(java(), "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC",
                 "-XX:ArchiveClassesAtExit=" + archive, "-Xlog:cds=off", "-Xlog:cds+dynamic=off",
-                "-Duser.home=" + home, "-Dstasis.archiveTraining=true"));
+                "-Duser.home=" + home, "-Dstasis.archiveTraining=" + part));
         command.addAll(options);
         command.addAll(List.of("-cp", classPath, Main.class.getName(), "samples/aml-breathless.json"));
         ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true)
