@@ -30,7 +30,8 @@ trap 'rm -rf "$work"' EXIT INT TERM
 # the probe in a jar of its own after the application jar: the launcher's archive stays usable (its class path is
 # a prefix of this one) and OpenPDF comes from the application jar's manifest class path, as in a real run
 (cd "$root/target/bench-classes" && "$jar" cf "$work/probe.jar" org/stasissheet/bench/PdfStackFloor.class) || exit 1
-floor_opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto -XX:SharedArchiveFile=$archive -Xlog:cds=off -Xlog:cds+dynamic=off"
+# the options the launcher gives a command-line run (src/main/dist/stasis-sheet), the pdf's archive
+floor_opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:-UsePerfData -XX:CICompilerCount=1 -Xshare:auto -XX:SharedArchiveFile=$archive -Xlog:cds=off -Xlog:cds+dynamic=off"
 
 # assess-full and pdf-full: the same commands through the whole command-line library (`--` keeps them off the quick
 # path, cli.QuickPath), to show in the same run what the quick path saves

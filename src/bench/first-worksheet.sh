@@ -30,7 +30,7 @@ trap cleanup EXIT INT TERM
 # stays usable: its class path is a prefix of this one)
 (cd "$root/target/test-classes" && "$jar" cf "$work/bench.jar" org/stasissheet/ui/FirstWorksheetBench*.class) || exit 1
 cp="$root/target/stasis-sheet.jar:$work/bench.jar"
-opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto"
+opts="-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:-UsePerfData -Xshare:auto"
 # the archive the launcher gives the form: its own, else the command line's
 form_archive="$root/target/stasis-sheet-form.jsa"
 [ -f "$form_archive" ] || form_archive="$root/target/stasis-sheet.jsa"

@@ -10,7 +10,9 @@ root=$(CDPATH='' cd -- "$(dirname -- "$self")/.." && pwd -P) || exit 1
 app="$root/lib/app"
 # one archive per way of starting, as src/main/dist/stasis-sheet explains: the form (no arguments, or one file to
 # open), pdf, the rest; the form takes the command line's while it has none of its own
-if [ $# -eq 0 ] || { [ $# -eq 1 ] && [ -f "$1" ]; }; then own=stasis-sheet-form.jsa
+# (and, as there, a command-line run gets one compiler thread, the form the default)
+compilers=-XX:CICompilerCount=1
+if [ $# -eq 0 ] || { [ $# -eq 1 ] && [ -f "$1" ]; }; then own=stasis-sheet-form.jsa; compilers=""
 elif [ "${1:-}" = pdf ]; then own=stasis-sheet-pdf.jsa
 else own=stasis-sheet.jsa
 fi
@@ -21,5 +23,6 @@ set -- -cp "@CLASSPATH@" org.stasissheet.Main "$@"
 [ -z "${STASIS_JAVA_OPTS:-}" ] || set -- $STASIS_JAVA_OPTS "$@"
 # an archive is named only when it exists: named and missing, the JVM would take it for a base to build on
 [ ! -f "$app/$own" ] || set -- -XX:SharedArchiveFile="$app/$own" "$@"
-exec "$root/lib/runtime/bin/java" -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto -Xlog:cds=off \
-    -Xlog:cds+dynamic=off "$@"
+[ -z "$compilers" ] || set -- "$compilers" "$@"
+exec "$root/lib/runtime/bin/java" -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:-UsePerfData -Xshare:auto \
+    -Xlog:cds=off -Xlog:cds+dynamic=off "$@"

@@ -17,7 +17,7 @@ set "PARTIAL=%HERE%stasis-sheet.jsa.partial"
 set "JAVA=java"
 if defined JAVA_HOME set "JAVA=%JAVA_HOME%\bin\java"
 set "QUIET=-Xlog:cds=off -Xlog:cds+dynamic=off"
-set "FAST=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC"
+set "FAST=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:-UsePerfData"
 if not exist "%JAR%" goto no_jar
 if "%~1"=="--make-archive" goto make_archive
 

@@ -1,12 +1,6 @@
 package org.stasissheet.intake;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
-import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.math.BigDecimal;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
@@ -61,11 +55,6 @@ record CaseDocument(Optional<String> format, Optional<PatientPart> patient, Opti
     private static final List<String> QUANTITY_KEYS = List.of("value", "unit");
     private static final List<String> VISCOSITY_KEYS = List.of("value", "unit", "temperature");
 
-    /**
-     * Writes {@code extra} back as compact JSON through the streaming writer alone: an object mapper would cost a
-     * cold command-line run some 40 ms of start-up for these few bytes (src/bench/RESULTS.md).
-     */
-    private static final JsonFactory COMPACT = new JsonFactory();
 
     static CaseDocument from(JsonNode root, Problems problems) {
         Shape s = new Shape(problems);
@@ -144,47 +133,7 @@ record CaseDocument(Optional<String> format, Optional<PatientPart> patient, Opti
                 wrongType("extra", "an object { ... } (kept as written)", node);
                 return "{}";
             }
-            StringWriter text = new StringWriter();
-            try (JsonGenerator g = COMPACT.createGenerator(text)) {
-                writeCompact(node, g);
-            } catch (JsonProcessingException e) {
-                problems.add("extra", "cannot be kept as written: " + e.getOriginalMessage());
-                return "{}";
-            } catch (IOException e) {
-                throw new UncheckedIOException("writing to a string cannot fail", e);
-            }
-            return text.toString();
-        }
-
-        /** The node as Jackson's mapper writes it compactly (ExtraKeptAsWrittenTest holds the two together). */
-        private static void writeCompact(JsonNode node, JsonGenerator g) throws IOException {
-            if (node.isObject()) {
-                g.writeStartObject();
-                for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> e = it.next();
-                    g.writeFieldName(e.getKey());
-                    writeCompact(e.getValue(), g);
-                }
-                g.writeEndObject();
-            } else if (node.isArray()) {
-                g.writeStartArray();
-                for (JsonNode item : node) {
-                    writeCompact(item, g);
-                }
-                g.writeEndArray();
-            } else if (node.isTextual()) {
-                g.writeString(node.textValue());
-            } else if (node.isBoolean()) {
-                g.writeBoolean(node.booleanValue());
-            } else if (node.isBigDecimal()) {
-                g.writeNumber(node.decimalValue());
-            } else if (node.isIntegralNumber()) {
-                g.writeNumber(node.bigIntegerValue());
-            } else if (node.isNumber()) {
-                g.writeNumber(node.doubleValue());
-            } else {
-                g.writeNull();
-            }
+            return JsonText.compact(node);
         }
 
         /**

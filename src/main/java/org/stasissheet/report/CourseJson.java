@@ -1,10 +1,9 @@
 package org.stasissheet.report;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.stasissheet.intake.JsonText;
 import java.time.OffsetDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.List;
@@ -23,21 +22,18 @@ import org.stasissheet.worksheet.Worksheet;
  * leukapheresis its projections, the next measured value and the comparison.
  */
 public final class CourseJson {
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    /** Nodes only: the text is written by {@link JsonText}, without an object mapper (a cold start saves its start-up). */
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private CourseJson() {
     }
 
     public static String render(CourseReport report) {
-        try {
-            return MAPPER.writeValueAsString(tree(report)) + System.lineSeparator();
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("course report could not be written as JSON", e);
-        }
+        return JsonText.pretty(tree(report)) + System.lineSeparator();
     }
 
     public static ObjectNode tree(CourseReport report) {
-        ObjectNode root = MAPPER.createObjectNode();
+        ObjectNode root = NODES.objectNode();
         root.put("format", CourseReport.FORMAT);
         root.set("ruleSet", WorksheetJson.ruleSet(report.latest().ruleSet()));
         ArrayNode assessments = root.putArray("assessments");
@@ -54,7 +50,7 @@ public final class CourseJson {
     }
 
     private static ObjectNode assessment(Worksheet sheet) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("at", time(sheet.source().assessedAt().orElseThrow()));
         n.set("hyperviscosity", WorksheetJson.hyperviscosity(sheet.hyperviscosity()));
         n.set("leukostasis", WorksheetJson.leukostasis(sheet.leukostasis()));
@@ -69,7 +65,7 @@ public final class CourseJson {
 
     private static ObjectNode procedure(ProcedureReview review) {
         Procedure p = review.procedure();
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("at", time(p.at()));
         n.put("kind", p.kind());
         if (p instanceof Procedure.PlasmaExchange x) {
@@ -88,9 +84,9 @@ public final class CourseJson {
         if (!checks.isEmpty()) {
             ObjectNode before = n.putObject("measuredBefore");
             ObjectNode projected = n.putObject("projected");
-            ObjectNode unknown = MAPPER.createObjectNode();
-            ObjectNode next = MAPPER.createObjectNode();
-            ObjectNode comparison = MAPPER.createObjectNode();
+            ObjectNode unknown = NODES.objectNode();
+            ObjectNode next = NODES.objectNode();
+            ObjectNode comparison = NODES.objectNode();
             for (AnalyteCheck c : checks) {
                 String key = c.analyte().key();
                 ObjectNode b = before.putObject(key);
@@ -131,7 +127,7 @@ public final class CourseJson {
     }
 
     private static ObjectNode projection(Projected p, Analyte a) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         String[] names = lowHighNames(p);
         n.put(names[0], p.low());
         n.put(names[1], p.high());

@@ -1,7 +1,7 @@
 package org.stasissheet.report;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import org.stasissheet.apheresis.ApheresisPlan;
@@ -21,14 +21,15 @@ import org.stasissheet.measure.Estimate;
  * both cases the enclosing object's {@code reasons} holds the sentence saying why, under the same key.
  */
 final class EstimatesJson {
-    private static final ObjectMapper MAPPER = new ObjectMapper();
+    /** Nodes only: the text is written by {@link JsonText}, without an object mapper (a cold start saves its start-up). */
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private EstimatesJson() {
     }
 
     static ObjectNode apheresis(ApheresisPlan plan) {
-        ObjectNode n = MAPPER.createObjectNode();
-        ObjectNode reasons = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
+        ObjectNode reasons = NODES.objectNode();
         number(n, reasons, "bloodVolumeL", plan.bloodVolumeL());
         number(n, reasons, "plasmaVolumeL", plan.plasmaVolumeL());
         number(n, reasons, "plasmaVolumeFromBloodVolumeL", plan.plasmaVolumeFromBloodVolumeL());
@@ -37,7 +38,7 @@ final class EstimatesJson {
         ArrayNode rows = n.putArray("exchanges");
         for (ExchangeRow row : plan.exchanges()) {
             ObjectNode r = rows.addObject();
-            ObjectNode rowReasons = MAPPER.createObjectNode();
+            ObjectNode rowReasons = NODES.objectNode();
             r.put("plasmaVolumes", row.plasmaVolumes());
             number(r, rowReasons, "volumeL", row.volumeL());
             r.put("intravascularRemaining", row.intravascularRemaining());
@@ -51,7 +52,7 @@ final class EstimatesJson {
             r.set("reasons", rowReasons);
         }
         ObjectNode leuka = n.putObject("leukapheresis");
-        ObjectNode leukaReasons = MAPPER.createObjectNode();
+        ObjectNode leukaReasons = NODES.objectNode();
         range(leuka, leukaReasons, "processVolumeL", plan.leukapheresis().processVolumeL());
         range(leuka, leukaReasons, "wbcAfter", plan.leukapheresis().wbcAfter());
         leuka.set("reasons", leukaReasons);
@@ -61,8 +62,8 @@ final class EstimatesJson {
     }
 
     static ObjectNode flow(FlowEstimates f) {
-        ObjectNode n = MAPPER.createObjectNode();
-        ObjectNode reasons = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
+        ObjectNode reasons = NODES.objectNode();
         n.put("referenceHematocrit", f.referenceHematocrit());
         n.put("referenceSerumViscosity", f.referenceSerumViscosity());
         number(n, reasons, "hematocrit", f.hematocrit());
@@ -87,7 +88,7 @@ final class EstimatesJson {
         ArrayNode whatIfs = n.putArray("whatIf");
         for (WhatIf w : f.whatIf()) {
             ObjectNode x = whatIfs.addObject();
-            ObjectNode whatReasons = MAPPER.createObjectNode();
+            ObjectNode whatReasons = NODES.objectNode();
             x.put("id", w.id());
             x.put("name", w.name());
             strings(x.putArray("assumptions"), w.assumptions());

@@ -1,10 +1,9 @@
 package org.stasissheet.report;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.stasissheet.intake.JsonText;
 import java.util.List;
 import java.util.Optional;
 import org.stasissheet.measure.Quantity;
@@ -21,21 +20,18 @@ import org.stasissheet.worksheet.Worksheet;
  * fixed order; each section has its own method so the mapping from record to key stays visible.
  */
 public final class WorksheetJson {
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    /** Nodes only: the text is written by {@link JsonText}, without an object mapper (a cold start saves its start-up). */
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private WorksheetJson() {
     }
 
     public static String render(Worksheet sheet) {
-        try {
-            return MAPPER.writeValueAsString(tree(sheet)) + System.lineSeparator();
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("worksheet could not be written as JSON", e);
-        }
+        return JsonText.pretty(tree(sheet)) + System.lineSeparator();
     }
 
     public static ObjectNode tree(Worksheet sheet) {
-        ObjectNode root = MAPPER.createObjectNode();
+        ObjectNode root = NODES.objectNode();
         root.put("format", Worksheet.FORMAT);
         root.set("ruleSet", ruleSet(sheet.ruleSet()));
         root.set("inputs", inputs(sheet));
@@ -51,7 +47,7 @@ public final class WorksheetJson {
     }
 
     static ObjectNode ruleSet(Provenance p) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("name", p.name());
         n.put("version", p.version());
         n.put("sha256", p.sha256());
@@ -60,7 +56,7 @@ public final class WorksheetJson {
     }
 
     static ObjectNode hyperviscosity(HyperviscosityVerdict v) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("assessment", v.assessment().code());
         n.put("route", v.route().code());
         n.put("signs", v.signs());
@@ -74,7 +70,7 @@ public final class WorksheetJson {
     }
 
     static ObjectNode leukostasis(LeukostasisVerdict v) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("assessed", v.assessed());
         n.put("gate", v.gate().code());
         ArrayNode toExamine = n.putArray("toExamine");
@@ -91,7 +87,7 @@ public final class WorksheetJson {
     }
 
     static ObjectNode tumorLysis(TumorLysisVerdict v) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         optionalBoolean(n, "laboratory", v.laboratory());
         optionalBoolean(n, "clinical", v.clinical());
         n.put("dependsOnUnconfirmed", v.dependsOnUnconfirmed());
@@ -115,7 +111,7 @@ public final class WorksheetJson {
     }
 
     static ArrayNode flags(List<Flag> flags) {
-        ArrayNode list = MAPPER.createArrayNode();
+        ArrayNode list = NODES.arrayNode();
         for (Flag f : flags) {
             ObjectNode n = list.addObject();
             n.put("id", f.id());
@@ -139,7 +135,7 @@ public final class WorksheetJson {
     }
 
     static ArrayNode inputs(Worksheet sheet) {
-        ArrayNode list = MAPPER.createArrayNode();
+        ArrayNode list = NODES.arrayNode();
         for (InputLine line : sheet.inputs()) {
             ObjectNode n = list.addObject();
             n.put("path", line.path());
@@ -151,7 +147,7 @@ public final class WorksheetJson {
     }
 
     static ObjectNode quantity(Quantity q) {
-        ObjectNode n = MAPPER.createObjectNode();
+        ObjectNode n = NODES.objectNode();
         n.put("value", q.value());
         n.put("unit", q.unit());
         return n;
