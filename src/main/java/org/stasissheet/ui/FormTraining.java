@@ -4,9 +4,6 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
 import javafx.application.Platform;
-import javafx.scene.Node;
-import javafx.scene.Parent;
-import javafx.scene.Scene;
 import javafx.scene.control.TabPane;
 import javafx.stage.Window;
 import javafx.stage.WindowEvent;
@@ -72,28 +69,9 @@ public final class FormTraining {
 
     /** On the JavaFX thread: once the verdicts are in a showing window, the next laid-out pulse counts. */
     private static void check(AtomicBoolean armed, CountDownLatch shown, CountDownLatch closed) {
-        if (armed.get()) {
-            return;
-        }
-        for (Window w : Window.getWindows()) {
-            Scene scene = w.getScene();
-            if (!w.isShowing() || scene == null) {
-                continue;
-            }
-            Node verdicts = scene.lookup("#verdicts");
-            if (verdicts instanceof Parent p && !p.getChildrenUnmodifiable().isEmpty()) {
-                armed.set(true);
-                Runnable[] listener = new Runnable[1];
-                listener[0] = () -> {
-                    if (p.getLayoutBounds().getHeight() > 0) {
-                        scene.removePostLayoutPulseListener(listener[0]);
-                        Platform.runLater(() -> showCourseThenClose(w, shown, closed));
-                    }
-                };
-                scene.addPostLayoutPulseListener(listener[0]);
-                Platform.requestNextPulse();
-                return;
-            }
+        if (!armed.get()
+                && FirstWorksheetWatch.arm(w -> Platform.runLater(() -> showCourseThenClose(w, shown, closed)))) {
+            armed.set(true);
         }
     }
 

@@ -2,10 +2,6 @@ package org.stasissheet.ui;
 
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
-import javafx.scene.Node;
-import javafx.scene.Parent;
-import javafx.scene.Scene;
-import javafx.stage.Window;
 
 /**
  * Benchmark, not a test: one cold start of the form, from the moment the script started the process
@@ -45,28 +41,13 @@ public final class FirstWorksheetBench {
 
     /** On the FX thread: once the verdicts are in a showing window, the next layout pulse is the one drawn. */
     private static void check(long t0) {
-        if (armed) {
-            return;
-        }
-        for (Window w : Window.getWindows()) {
-            Scene scene = w.getScene();
-            if (!w.isShowing() || scene == null) {
-                continue;
-            }
-            Node verdicts = scene.lookup("#verdicts");
-            if (verdicts instanceof Parent p && !p.getChildrenUnmodifiable().isEmpty()) {
-                armed = true;
-                scene.addPostLayoutPulseListener(() -> {
-                    if (p.getLayoutBounds().getHeight() > 0) {
-                        System.out.println(System.currentTimeMillis() - t0);
-                        System.out.flush();
-                        // exit from a thread of its own: shutdown hooks may need this (the FX) thread
-                        new Thread(() -> System.exit(0), "first-worksheet-exit").start();
-                    }
-                });
-                Platform.requestNextPulse();
-                return;
-            }
+        if (!armed && FirstWorksheetWatch.arm(w -> {
+            System.out.println(System.currentTimeMillis() - t0);
+            System.out.flush();
+            // exit from a thread of its own: shutdown hooks may need this (the FX) thread
+            new Thread(() -> System.exit(0), "first-worksheet-exit").start();
+        })) {
+            armed = true;
         }
     }
 
