@@ -14,6 +14,7 @@ import org.stasissheet.intake.Retinopathy;
 import org.stasissheet.measure.Numbers;
 import org.stasissheet.rules.Flag;
 import org.stasissheet.rules.Level;
+import org.stasissheet.rules.PulmonarySuggestion;
 import org.stasissheet.worksheet.Cautions;
 import org.stasissheet.worksheet.InputLine;
 import org.stasissheet.worksheet.Worksheet;
@@ -47,6 +48,7 @@ public final class HandoffNote {
         if (actNow.size() > MAX_ACT_NOW_LINES) {
             lines.add("  ... and " + (actNow.size() - MAX_ACT_NOW_LINES) + " more act-now items on the worksheet");
         }
+        oxygen(sheet.pulmonarySuggestion()).ifPresent(lines::add);
         lines.add("Recommendation: " + (actNow.isEmpty() ? "nothing flagged to act on now" : "the act-now items above")
                 + (review > 0 ? "; " + review + " item" + (review == 1 ? "" : "s") + " to review on the worksheet" : "")
                 + "; act on the clinical picture and reassess when it changes.");
@@ -55,6 +57,17 @@ public final class HandoffNote {
                 + ", assessed " + c.assessedAt().map(ReportTime.FORMAT::format).orElse("at an unrecorded time")
                 + ". " + Cautions.SHORT);
         return String.join(NL, lines) + NL;
+    }
+
+    /**
+     * When the oxygen values call for a higher pulmonary grade than the one set, one line says so: the grade in the
+     * situation line alone would hand over a patient who needs oxygen as a milder one.
+     */
+    private static Optional<String> oxygen(PulmonarySuggestion s) {
+        return s.suggested().map(g -> s.oxygenNeed() + " The values suggest pulmonary grade " + g
+                + " (not applied; grade set: " + s.gradeSet().map(String::valueOf).orElse("not assessed")
+                + "): check it against the patient"
+                + (s.cautions().isEmpty() ? "." : "; at this white count the value may be spurious (see the worksheet)."));
     }
 
     /** Who the patient is, the disease, and the signs now: organ grades of 1 or more are signs. */

@@ -49,6 +49,18 @@ class PulmonarySuggestionPdfTest {
     }
 
     @Test
+    @DisplayName("the handoff note says the oxygen need and the grade suggested but not applied, within 20 lines")
+    void suggestionInTheNote() {
+        String note = HandoffNote.render(sample("aml-breathless.json"), false);
+        assertTrue(note.contains("Oxygen needed: PaO2 6.9 kPa is below 8 kPa"), note);
+        assertTrue(note.contains("The values suggest pulmonary grade 3 (not applied; grade set: 2): check it against "
+                + "the patient; at this white count the value may be spurious"), note);
+        assertTrue(note.lines().count() <= HandoffNote.MAX_LINES, note);
+        String quiet = HandoffNote.render(sample("igm-symptomatic.json"), false);
+        assertFalse(quiet.contains("suggest pulmonary grade"), quiet);
+    }
+
+    @Test
     @DisplayName("a paraprotein case without oxygen values gets no oxygen lines")
     void noClutterWithoutValues() {
         String text = WorksheetText.render(sample("igm-symptomatic.json"));
