@@ -12,12 +12,10 @@ import javafx.scene.Node;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
 import org.stasissheet.ui.ScriptedShell;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -25,17 +23,10 @@ import org.testfx.util.WaitForAsyncUtils;
  * Files around the form: the suggested export name and folder, a file given on the command line, and the flow chart
  * taking no space without a hematocrit. The samples are invented.
  */
-@ExtendWith(ApplicationExtension.class)
-class FilesFormTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
-
+class FilesFormTest extends FormFixture {
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private MainWindow openWith(Path file, ScriptedShell otherShell) throws Exception {

@@ -16,34 +16,24 @@ import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
 import org.stasissheet.files.CaseFiles;
 import org.stasissheet.intake.CaseReader;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
-import org.stasissheet.ui.ScriptedShell;
 import org.stasissheet.worksheet.Assessor;
 import org.stasissheet.worksheet.Worksheet;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The worksheet side against the core: what the form shows is what {@code assess} says for the same case. */
-@ExtendWith(ApplicationExtension.class)
-class FormVerdictTest {
+class FormVerdictTest extends FormFixture {
     private static final RuleSet SHIPPED = org.stasissheet.load.Inputs.ruleSet(Optional.empty());
-
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
 
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private String shown(FxRobot robot, String verdict) {

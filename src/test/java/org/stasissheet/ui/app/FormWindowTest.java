@@ -15,26 +15,17 @@ import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
 import org.stasissheet.ui.ScriptedShell;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
-@ExtendWith(ApplicationExtension.class)
-class FormWindowTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
-
+class FormWindowTest extends FormFixture {
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private <T extends Node> T node(FxRobot robot, String id) {

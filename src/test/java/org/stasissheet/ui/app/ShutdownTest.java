@@ -16,26 +16,16 @@ import java.util.concurrent.TimeUnit;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
-import org.stasissheet.ui.ScriptedShell;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The shutdown path in this JVM: work in flight, the draft written there and then, nothing thrown or printed. */
-@ExtendWith(ApplicationExtension.class)
-class ShutdownTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
-
+class ShutdownTest extends FormFixture {
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     @Test

@@ -18,8 +18,6 @@ import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
 import org.stasissheet.course.AnalyteCheck;
 import org.stasissheet.course.Course;
 import org.stasissheet.course.CourseAssessor;
@@ -33,11 +31,11 @@ import org.stasissheet.measure.Analyte;
 import org.stasissheet.report.CourseText;
 import org.stasissheet.rules.LoadResult;
 import org.stasissheet.rules.RuleSet;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
 import org.stasissheet.ui.ScriptedShell;
 import org.stasissheet.ui.app.MainWindow;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -47,19 +45,12 @@ import org.testfx.util.WaitForAsyncUtils;
  * checked against the course core's own report of the same course file ({@code courses/gertz-2018-iga.json}, as
  * {@code course.GertzCourseTest} assesses it) and against the values worked by hand there.
  */
-@ExtendWith(ApplicationExtension.class)
-class CourseFormTest {
+class CourseFormTest extends FormFixture {
     private static final RuleSet RULES = ((LoadResult.Loaded) RuleSources.shipped()).ruleSet();
-
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
 
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private static byte[] gertzBytes() throws IOException {

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,14 +21,10 @@ import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
-import org.stasissheet.ui.ScriptedShell;
-import org.stasissheet.ui.app.MainWindow;
 import org.stasissheet.ui.app.PreferencesStore;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -38,17 +33,10 @@ import org.testfx.util.WaitForAsyncUtils;
  * always on screen, Enter visits every input, pickers take typed letters, a new case records its time and
  * assessor, and typed or pasted units and decimal commas are read or asked about.
  */
-@ExtendWith(ApplicationExtension.class)
-class FormKeyboardTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
-
+class FormKeyboardTest extends FormFixture {
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
         // the night resident's laptop: 1366×768, less the desktop's panel (the headless screen may be narrower)
         javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getBounds();
         stage.setX(0);

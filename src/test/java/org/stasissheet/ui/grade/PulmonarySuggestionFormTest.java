@@ -13,13 +13,9 @@ import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
-import org.stasissheet.ui.ScriptedShell;
-import org.stasissheet.ui.app.MainWindow;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -28,17 +24,10 @@ import org.testfx.util.WaitForAsyncUtils;
  * guidelines; PaO2 below 60 mmHg / 8 kPa as hypoxaemic respiratory failure), the artefacts at high counts from Van de
  * Louw A et al., Respir Care 2016 [published]. The values typed are invented.
  */
-@ExtendWith(ApplicationExtension.class)
-class PulmonarySuggestionFormTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
-
+class PulmonarySuggestionFormTest extends FormFixture {
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private <T extends Node> T node(FxRobot robot, String id) {

@@ -16,30 +16,20 @@ import javafx.scene.input.ClipboardContent;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
+import org.stasissheet.ui.FormFixture;
 import org.stasissheet.ui.FormHarness;
-import org.stasissheet.ui.ScriptedShell;
-import org.stasissheet.ui.app.MainWindow;
 import org.stasissheet.ui.entry.FieldModel;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The form's "Import lab results…": paste, preview, answer a question, accept, undo; driven through the window. */
-@ExtendWith(ApplicationExtension.class)
-class LabImportFormTest {
-    @TempDir
-    Path data;
-
-    final ScriptedShell shell = new ScriptedShell();
-    MainWindow window;
+class LabImportFormTest extends FormFixture {
     LabImportWindow dialog;
 
     @Start
     void start(Stage stage) {
-        window = MainWindow.open(stage, FormHarness.settings(data, shell));
+        open(stage);
     }
 
     private void openAndPaste(FxRobot robot, String text) throws Exception {
