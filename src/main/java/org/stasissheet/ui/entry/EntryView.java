@@ -257,13 +257,20 @@ public final class EntryView {
         return box;
     }
 
+    /** A row's message under its input: wrapped, read out by screen readers as text. */
+    private static Label rowMessage(String id, String styleClass) {
+        Label message = new Label();
+        message.setId(id);
+        message.getStyleClass().add(styleClass);
+        message.setWrapText(true);
+        message.setAccessibleRole(javafx.scene.AccessibleRole.TEXT);
+        return message;
+    }
+
     /** @param input where the focus goes back to after a fix (its button disappears with the problem) */
     private Node problem(FieldModel field, Control input) {
         String id = field.spec().id();
-        Label message = new Label();
-        message.setId(id + "-problem");
-        message.getStyleClass().add("field-problem");
-        message.setWrapText(true);
+        Label message = rowMessage(id + "-problem", "field-problem");
         message.textProperty().bind(Bindings.createStringBinding(() -> {
             String p = field.problemProperty().get();
             if (p.isEmpty()) {
@@ -271,7 +278,6 @@ public final class EntryView {
             }
             return "PROBLEM: " + p + (field.leftOutProperty().get() ? "\n(the worksheet leaves this value out)" : "");
         }, field.problemProperty(), field.leftOutProperty()));
-        message.setAccessibleRole(javafx.scene.AccessibleRole.TEXT);
         FlowPane fixes = new FlowPane(6, 4);
         fixes.getStyleClass().add("fixes");
         field.fixesProperty().addListener((javafx.collections.ListChangeListener<UnitFix>) c -> {
@@ -306,16 +312,12 @@ public final class EntryView {
      */
     private Node typedReading(FieldModel field, Control input) {
         String id = field.spec().id();
-        Label message = new Label();
-        message.setId(id + "-reading");
-        message.getStyleClass().add("field-reading");
-        message.setWrapText(true);
+        Label message = rowMessage(id + "-reading", "field-reading");
         message.textProperty().bind(Bindings.createStringBinding(() -> {
             String r = field.readingProperty().get();
             return r.isEmpty() ? "" : field.readingsProperty().isEmpty() && !r.startsWith("read ") ? "NOT READ: " + r
                     : field.readingsProperty().isEmpty() ? r : "CHECK: " + r;
         }, field.readingProperty(), field.readingsProperty()));
-        message.setAccessibleRole(javafx.scene.AccessibleRole.TEXT);
         FlowPane takes = new FlowPane(6, 4);
         field.readingsProperty().addListener((javafx.collections.ListChangeListener<TypedReading>) c -> {
             takes.getChildren().clear();
