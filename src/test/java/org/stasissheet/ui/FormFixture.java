@@ -1,10 +1,12 @@
 package org.stasissheet.ui;
 
 import java.nio.file.Path;
+import javafx.scene.Node;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.stasissheet.ui.app.MainWindow;
+import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 
 /**
@@ -21,6 +23,11 @@ public abstract class FormFixture {
     protected final ScriptedShell shell = new ScriptedShell();
 
     protected MainWindow window;
+
+    /** The node with this id ({@code #id}) in the form. */
+    protected static <T extends Node> T node(FxRobot robot, String id) {
+        return robot.lookup("#" + id).query();
+    }
 
     /** Opens the form in the stage TestFX hands to the test class's {@code @Start}. */
     protected final void open(Stage stage) {

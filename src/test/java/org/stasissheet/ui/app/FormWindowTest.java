@@ -28,10 +28,6 @@ class FormWindowTest extends FormFixture {
         open(stage);
     }
 
-    private <T extends Node> T node(FxRobot robot, String id) {
-        return robot.lookup("#" + id).query();
-    }
-
     /** Focuses a text field and types into it with the robot's keyboard, replacing what was there. */
     private void type(FxRobot robot, String id, String text) throws Exception {
         TextField f = node(robot, id);

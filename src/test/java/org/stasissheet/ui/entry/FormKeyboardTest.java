@@ -45,10 +45,6 @@ class FormKeyboardTest extends FormFixture {
         stage.setHeight(Math.min(740, screen.getHeight()));
     }
 
-    private <T extends Node> T node(FxRobot robot, String id) {
-        return robot.lookup("#" + id).query();
-    }
-
     private String focused() {
         Node n = window.stage().getScene().getFocusOwner();
         return n == null ? "(none)" : n.getId();

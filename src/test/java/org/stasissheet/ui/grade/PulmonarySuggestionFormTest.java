@@ -30,10 +30,6 @@ class PulmonarySuggestionFormTest extends FormFixture {
         open(stage);
     }
 
-    private <T extends Node> T node(FxRobot robot, String id) {
-        return robot.lookup("#" + id).query();
-    }
-
     private void type(FxRobot robot, String id, String text) throws Exception {
         TextField f = node(robot, id);
         FormHarness.scrollTo(f);
